@@ -1,4 +1,5 @@
-// Two projects: the pure and server code in a Node environment, the components under jest-expo.
+// The pure and server code run in Node, the components under jest-expo, and the browser tests in
+// Node driving Chromium against the real server.
 const moduleNameMapper = {
   '^@/(.*)$': '<rootDir>/src/$1',
   '^@shared/(.*)$': '<rootDir>/shared/$1',
@@ -19,6 +20,14 @@ module.exports = {
       preset: 'jest-expo/web',
       testMatch: ['<rootDir>/test/{src,app}/**/*.test.tsx'],
       moduleNameMapper,
+    },
+    {
+      displayName: 'e2e',
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/test/e2e/**/*.test.ts'],
+      transform: { '^.+\\.[jt]sx?$': 'babel-jest' },
+      moduleNameMapper,
+      testTimeout: 120000,
     },
   ],
 };

@@ -1,0 +1,55 @@
+/**
+ * Builds the Express app without listening, so tests can drive it over HTTP with supertest.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import cors from 'cors';
+import express, { Express } from 'express';
+import helmet from 'helmet';
+import { AppContext } from './context';
+import { apiErrorHandler, apiNotFound } from './middleware/error-handler';
+import { apiRoutes } from './routes';
+import { mountRoutes } from './routes/route-table';
+
+export const JSON_BODY_LIMIT = '100kb';
+
+function securityHeaders() {
+  return helmet({
+    contentSecurityPolicy: {
+      useDefaults: true,
+      // A phone reaches the shop's machine over plain HTTP on the local network.
+      directives: { 'upgrade-insecure-requests': null },
+    },
+    strictTransportSecurity: false,
+  });
+}
+
+function serveWebBuild(app: Express, webDir: string) {
+  const index = path.join(webDir, 'index.html');
+  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  app.get('/{*splat}', (_req, res) => {
+    if (fs.existsSync(index)) {
+      res.set('Cache-Control', 'no-cache').sendFile(index);
+    } else {
+      res.status(503).type('text').send('The web app has not been built yet: run `npm run build`.');
+    }
+  });
+}
+
+export function createApp(ctx: AppContext): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(securityHeaders());
+
+  const api = express.Router();
+  api.use(cors({ origin: ctx.config.corsOrigins, credentials: true }));
+  api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(mountRoutes(apiRoutes(ctx)));
+  api.use(apiNotFound);
+  api.use(apiErrorHandler(ctx.log));
+  app.use('/api', api);
+
+  serveWebBuild(app, ctx.config.webDir);
+  return app;
+}

@@ -17,8 +17,10 @@ module.exports = {
     },
     {
       displayName: 'app',
-      preset: 'jest-expo/web',
-      testMatch: ['<rootDir>/test/{src,app}/**/*.test.tsx'],
+      // The native preset, so Testing Library's queries see host components; what only the
+      // browser shows is covered by the browser tests in test/e2e.
+      preset: 'jest-expo/ios',
+      testMatch: ['<rootDir>/test/{src,app}/**/*.test.ts?(x)'],
       moduleNameMapper,
     },
     {
@@ -27,7 +29,7 @@ module.exports = {
       testMatch: ['<rootDir>/test/e2e/**/*.test.ts'],
       transform: { '^.+\\.[jt]sx?$': 'babel-jest' },
       moduleNameMapper,
-      testTimeout: 120000,
+      setupFilesAfterEnv: ['<rootDir>/test/e2e/setup.ts'],
     },
   ],
 };

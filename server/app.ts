@@ -3,10 +3,12 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import cookieParser from 'cookie-parser';
 import cors from 'cors';
 import express, { Express } from 'express';
 import helmet from 'helmet';
 import { AppContext } from './context';
+import { authGuards } from './middleware/auth';
 import { apiErrorHandler, apiNotFound } from './middleware/error-handler';
 import { apiRoutes } from './routes';
 import { mountRoutes } from './routes/route-table';
@@ -45,7 +47,8 @@ export function createApp(ctx: AppContext): Express {
   const api = express.Router();
   api.use(cors({ origin: ctx.config.corsOrigins, credentials: true }));
   api.use(express.json({ limit: JSON_BODY_LIMIT }));
-  api.use(mountRoutes(apiRoutes(ctx)));
+  api.use(cookieParser());
+  api.use(mountRoutes(apiRoutes(ctx), authGuards(ctx)));
   api.use(apiNotFound);
   api.use(apiErrorHandler(ctx.log));
   app.use('/api', api);

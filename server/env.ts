@@ -3,6 +3,34 @@
  */
 import path from 'node:path';
 
+/** At most `limit` requests per key in any `windowMs`. */
+export interface RateLimit {
+  limit: number;
+  windowMs: number;
+}
+
+/** Every abuse limit, here only, so tests and benchmarks raise them explicitly. */
+export interface RateLimits {
+  /** Keyed by client IP and the e-mail tried, so one mistyping rider does not lock out a shop behind one address. */
+  signIn: RateLimit;
+  /** Keyed by client IP. */
+  signUp: RateLimit;
+  /** Reset request and reset together, keyed by client IP. */
+  reset: RateLimit;
+}
+
+const MINUTE = 60_000;
+
+export const DEFAULT_RATE_LIMITS: RateLimits = {
+  signIn: { limit: 10, windowMs: 15 * MINUTE },
+  signUp: { limit: 5, windowMs: 60 * MINUTE },
+  reset: { limit: 5, windowMs: 15 * MINUTE },
+};
+
+export type SmtpSettings =
+  | { url: string }
+  | { host: string; port: number; secure: boolean; user?: string; pass?: string };
+
 export interface ServerConfig {
   port: number;
   dataDir: string;
@@ -12,20 +40,56 @@ export interface ServerConfig {
   version: string;
   /** Origins allowed to call the API from another origin (the Expo dev server); empty closes CORS. */
   corsOrigins: string[];
+  /** Signs session tokens; without it a secret is generated once into the data folder. */
+  jwtSecret?: string;
+  /** Where the web app is reached, for links in mails; without it, the origin of the request. */
+  publicUrl?: string;
+  /** Outgoing mail; without it, outside production, a local stand-in keeps every mail in the data folder. */
+  smtp?: SmtpSettings;
+  mailFrom: string;
+  rateLimits: RateLimits;
 }
 
 const root = path.resolve(__dirname, '..');
 
-function readPort(raw: string | undefined): number {
-  if (raw === undefined || raw === '') return 8080;
+function readPort(raw: string | undefined, fallback = 8080, name = 'PORT'): number {
+  if (raw === undefined || raw === '') return fallback;
   const port = Number(raw);
   if (!Number.isInteger(port) || port < 0 || port > 65535) {
-    throw new Error(`PORT must be a whole number from 0 to 65535, not "${raw}"`);
+    throw new Error(`${name} must be a whole number from 0 to 65535, not "${raw}"`);
   }
   return port;
 }
 
-export function readConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
+function readJwtSecret(raw: string | undefined): string | undefined {
+  if (raw === undefined || raw === '') return undefined;
+  if (raw.length < 32) throw new Error('SAGWRIGHT_JWT_SECRET must be at least 32 characters long');
+  return raw;
+}
+
+function readPublicUrl(raw: string | undefined): string | undefined {
+  if (raw === undefined || raw === '') return undefined;
+  const url = new URL(raw);
+  if (url.protocol !== 'http:' && url.protocol !== 'https:') {
+    throw new Error(`SAGWRIGHT_PUBLIC_URL must be an http(s) address, not "${raw}"`);
+  }
+  return url.origin + url.pathname.replace(/\/+$/, '');
+}
+
+function readSmtp(env: Record<string, string | undefined>): SmtpSettings | undefined {
+  if (env.SMTP_URL) return { url: env.SMTP_URL };
+  if (!env.SMTP_HOST) return undefined;
+  const port = readPort(env.SMTP_PORT, 587, 'SMTP_PORT');
+  return {
+    host: env.SMTP_HOST,
+    port,
+    secure: env.SMTP_SECURE === 'true' || port === 465,
+    user: env.SMTP_USER || undefined,
+    pass: env.SMTP_PASS || undefined,
+  };
+}
+
+export function readConfig(env: Record<string, string | undefined> = process.env): ServerConfig {
   const production = env.NODE_ENV === 'production';
   return {
     port: readPort(env.PORT),
@@ -37,5 +101,10 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     corsOrigins: production
       ? []
       : (env.SAGWRIGHT_DEV_ORIGINS ?? 'http://localhost:8081').split(',').map((o) => o.trim()).filter(Boolean),
+    jwtSecret: readJwtSecret(env.SAGWRIGHT_JWT_SECRET),
+    publicUrl: readPublicUrl(env.SAGWRIGHT_PUBLIC_URL),
+    smtp: readSmtp(env),
+    mailFrom: env.SAGWRIGHT_MAIL_FROM || 'Sagwright <no-reply@sagwright.invalid>',
+    rateLimits: DEFAULT_RATE_LIMITS,
   };
 }

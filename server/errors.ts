@@ -25,14 +25,14 @@ export class BadRequestError extends HttpError {
 }
 
 export class UnauthorizedError extends HttpError {
-  constructor(message = 'Sign in to continue.') {
-    super(401, 'unauthorized', message);
+  constructor(message = 'Sign in to continue.', code = 'unauthorized') {
+    super(401, code, message);
   }
 }
 
 export class ForbiddenError extends HttpError {
-  constructor(message = 'Your account may not do this.') {
-    super(403, 'forbidden', message);
+  constructor(message = 'Your account may not do this.', code = 'forbidden') {
+    super(403, code, message);
   }
 }
 
@@ -43,7 +43,13 @@ export class NotFoundError extends HttpError {
 }
 
 export class ConflictError extends HttpError {
-  constructor(message: string, code = 'conflict') {
-    super(409, code, message);
+  constructor(message: string, code = 'conflict', fields?: FieldErrors) {
+    super(409, code, message, fields);
+  }
+}
+
+export class RateLimitedError extends HttpError {
+  constructor(message = 'Too many attempts; wait a few minutes and try again.') {
+    super(429, 'rate-limited', message);
   }
 }

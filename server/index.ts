@@ -1,29 +1,36 @@
-/** Starts Sagwright: opens the database (migrating it), loads the demo once, and listens. */
+/**
+ * Starts Sagwright: opens the database (migrating it), the token secret and mail (with the local
+ * SMTP stand-in outside production), loads the demo once, and listens.
+ */
 import { createApp } from './app';
-import { AppContext } from './context';
-import { Database } from './data-source';
+import { openContext } from './context';
 import { readConfig } from './env';
-import { seedDemo } from './seed';
+import { seed } from './seed';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './seed/demo-accounts';
 
 async function main() {
   const config = readConfig();
   const log = (message: string, detail?: unknown) => console.error(`[sagwright] ${message}`, detail ?? '');
-  const db = await Database.open(config.dataDir);
-  if (config.seedDemo) {
-    const loaded = await seedDemo(db);
-    if (loaded.length) console.log(`Loaded demo data: ${loaded.join(', ')}`);
-  }
-  const ctx: AppContext = { config, db, log };
+  const { ctx, close } = await openContext(config, log);
+  const loaded = await seed(ctx.db, { demo: config.seedDemo });
+  if (loaded.length) console.log(`Loaded seed data: ${loaded.join(', ')}`);
+  if (config.production && !config.smtp) log('no SMTP server is configured (SMTP_URL or SMTP_HOST): reset mails cannot be sent');
+  if (config.production && !config.publicUrl) log('SAGWRIGHT_PUBLIC_URL is not set: links in mails follow the Host header of each request');
   const server = createApp(ctx).listen(config.port, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
     console.log(`Sagwright is running at http://localhost:${port}`);
+    if (config.seedDemo) {
+      console.log(`Demo accounts, password "${DEMO_PASSWORD}":`);
+      for (const account of DEMO_ACCOUNTS) console.log(`  ${account.email.padEnd(20)} ${account.role}`);
+    }
     console.log(`Data folder: ${config.dataDir}`);
+    if (ctx.outbox) console.log(`Mail is not sent but kept in ${ctx.outbox.dir} (admin: GET /api/dev/outbox)`);
   });
 
   const stop = () => {
     server.close(() => {
-      db.close().finally(() => process.exit(0));
+      close().finally(() => process.exit(0));
     });
   };
   process.on('SIGINT', stop);

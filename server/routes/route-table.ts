@@ -3,20 +3,36 @@
  * and the authorization test can walk the whole table (Express cannot list its own routes).
  */
 import { RequestHandler, Router } from 'express';
+import { Role, ROLES } from '../../shared/types/roles';
 
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
-export type Access = { kind: 'public' };
+/**
+ * Who may call a route. Each kind has its guard in `Guards`, so a new kind (a customer's quote
+ * link, a payment webhook) cannot be declared without saying how it is checked.
+ */
+export type Access = { kind: 'public' } | { kind: 'signed-in'; roles: readonly Role[] };
 
 export interface RouteSpec {
   method: Method;
   /** Path below /api, in Express syntax. */
   path: string;
   access: Access;
+  /** Runs after the guard, before the handler. */
+  rateLimit?: RequestHandler;
   handler: RequestHandler;
 }
 
 export const publicAccess: Access = { kind: 'public' };
+
+/** Any signed-in account, whatever its role. */
+export const anyRole: Access = { kind: 'signed-in', roles: ROLES };
+
+export function signedIn(...roles: [Role, ...Role[]]): Access {
+  return { kind: 'signed-in', roles };
+}
+
+export type Guards = { [K in Access['kind']]: (access: Extract<Access, { kind: K }>) => RequestHandler[] };
 
 /** Wraps an async handler so a rejected promise reaches the error middleware. */
 export function handle(fn: RequestHandler): RequestHandler {
@@ -25,10 +41,17 @@ export function handle(fn: RequestHandler): RequestHandler {
   };
 }
 
-export function mountRoutes(routes: RouteSpec[]): Router {
+function guardFor(access: Access, guards: Guards): RequestHandler[] {
+  // The mapped type pairs each kind with its guard; TypeScript cannot narrow the lookup itself.
+  const guard = guards[access.kind] as (access: Access) => RequestHandler[];
+  return guard(access);
+}
+
+export function mountRoutes(routes: RouteSpec[], guards: Guards): Router {
   const router = Router();
   for (const route of routes) {
-    router[route.method](route.path, handle(route.handler));
+    const chain = [...guardFor(route.access, guards), ...(route.rateLimit ? [route.rateLimit] : []), route.handler];
+    router[route.method](route.path, ...chain.map(handle));
   }
   return router;
 }

@@ -1,23 +1,33 @@
 /**
- * Loads the demo scenario, each part once: a part that has a seed_record row is skipped, so a
- * restart changes nothing. Each later part of the product appends its own part here.
+ * Loads seed data, each part once: a part that has a seed_record row is skipped, so a restart
+ * changes nothing. Baseline parts load on every installation; demo parts only with the demo on.
+ * Each later part of the product appends its own part to the list it belongs to.
  */
+import { EntityManager } from 'typeorm';
 import { Database } from '../data-source';
 import { SeedRecord } from '../entities/seed-record.entity';
-import { EntityManager } from 'typeorm';
+import { seedDemoAccounts } from './demo-accounts';
+import { seedDemoCatalogue } from './demo-catalogue';
 import { seedDemoWorkshop } from './demo-workshop';
+import { seedSizingDefaults } from './sizing-baseline';
 
 interface SeedPart {
   name: string;
   run: (manager: EntityManager) => Promise<void>;
 }
 
-const demoParts: SeedPart[] = [{ name: 'demo-workshop', run: seedDemoWorkshop }];
+const baselineParts: SeedPart[] = [{ name: 'sizing-defaults', run: seedSizingDefaults }];
+
+const demoParts: SeedPart[] = [
+  { name: 'demo-workshop', run: seedDemoWorkshop },
+  { name: 'demo-catalogue', run: seedDemoCatalogue },
+  { name: 'demo-accounts', run: seedDemoAccounts },
+];
 
 /** Returns the names of the parts loaded by this call. */
-export async function seedDemo(db: Database): Promise<string[]> {
+export async function seed(db: Database, options: { demo: boolean }): Promise<string[]> {
   const loaded: string[] = [];
-  for (const part of demoParts) {
+  for (const part of [...baselineParts, ...(options.demo ? demoParts : [])]) {
     const done = await db.write(async (manager) => {
       const records = manager.getRepository(SeedRecord);
       if (await records.existsBy({ name: part.name })) return false;

@@ -47,7 +47,8 @@ describe.each(Object.keys(viewports) as ViewportName[])('home screen at %s size'
     expect(fontResponses.filter((r) => r.status !== 200)).toEqual([]);
 
     await page.getByText(/spring compressor/i).first().waitFor();
-    await page.getByText(/database ok|server ok|connected/i).first().waitFor();
+    await page.getByText('Server up').waitFor();
+    await page.getByText(/^SQLite 3\./).waitFor();
 
     await screenshot(page, `home-${size}`);
     expect(errors).toEqual([]);

@@ -1,16 +1,16 @@
 import { Database } from '../../server/data-source';
 import { Shop } from '../../server/entities/shop.entity';
-import { seedDemo } from '../../server/seed';
+import { seed } from '../../server/seed';
 import { tempDir } from './test-context';
 
 test('the demo loads once and survives a restart; a new folder starts clean', async () => {
   const dir = tempDir();
   let db = await Database.open(dir);
-  expect(await seedDemo(db)).toContain('demo-workshop');
+  expect(await seed(db, { demo: true })).toEqual(expect.arrayContaining(['sizing-defaults', 'demo-workshop', 'demo-catalogue']));
   await db.close();
 
   db = await Database.open(dir);
-  expect(await seedDemo(db)).toEqual([]);
+  expect(await seed(db, { demo: true })).toEqual([]);
   expect(await db.read.getRepository(Shop).count()).toBe(1);
   await db.close();
 

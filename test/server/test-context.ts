@@ -1,15 +1,19 @@
-/** A real app over a fresh SQLite file in a temporary folder, for API tests. */
+/**
+ * A real app over a fresh SQLite file in a temporary folder, for API tests, with the local SMTP
+ * stand-in running (as in development) and a clock the test can move forward.
+ */
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { createApp } from '../../server/app';
-import { AppContext } from '../../server/context';
-import { Database } from '../../server/data-source';
+import { AppContext, openContext } from '../../server/context';
 import { readConfig, ServerConfig } from '../../server/env';
 
 export interface TestContext extends AppContext {
   app: ReturnType<typeof createApp>;
   logged: string[];
+  /** Moves the services' clock (`now()`) forward; token expiry and reset links follow it. */
+  advanceClock: (ms: number) => void;
   dispose: () => Promise<void>;
 }
 
@@ -25,16 +29,19 @@ export async function makeTestContext(overrides: Partial<ServerConfig> = {}): Pr
     webDir: path.join(dataDir, 'web'),
     ...overrides,
   };
-  const db = await Database.open(config.dataDir);
   const logged: string[] = [];
-  const ctx: AppContext = { config, db, log: (message) => logged.push(message) };
+  let offsetMs = 0;
+  const { ctx, close } = await openContext(config, (message) => logged.push(message), () => new Date(Date.now() + offsetMs));
   return {
     ...ctx,
     app: createApp(ctx),
     logged,
+    advanceClock: (ms) => {
+      offsetMs += ms;
+    },
     dispose: async () => {
-      await db.close();
-      fs.rmSync(dataDir, { recursive: true, force: true });
+      await close();
+      fs.rmSync(config.dataDir, { recursive: true, force: true });
     },
   };
 }

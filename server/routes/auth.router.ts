@@ -1,0 +1,122 @@
+/**
+ * Sign-up, sign-in, the refresh cookie, sign-out, password reset and /me. Answers carrying a session
+ * set the refresh cookie, scoped to /api/auth so no other request ever carries it.
+ */
+import { Request, Response } from 'express';
+import { resetRequestSchema, resetSchema, signInSchema, signUpSchema } from '../../shared/schemas/auth.schema';
+import { SessionAnswer } from '../../shared/types/account';
+import { AppContext } from '../context';
+import { User } from '../entities/user.entity';
+import { UnauthorizedError } from '../errors';
+import { currentUser } from '../middleware/auth';
+import { rateLimiters } from '../middleware/rate-limit';
+import { PasswordResetService } from '../services/password-reset.service';
+import { SessionService, TOKEN_SECONDS } from '../services/session.service';
+import { toAccountUser, UsersService } from '../services/users.service';
+import { anyRole, publicAccess, RouteSpec } from './route-table';
+import { parseInput } from './validate';
+
+export const REFRESH_COOKIE = 'sagwright_refresh';
+const REFRESH_COOKIE_PATH = '/api/auth';
+
+/** Where links in mails point: the configured address, else the web app the request came from. */
+function publicBaseUrl(ctx: AppContext, req: Request): string {
+  if (ctx.config.publicUrl) return ctx.config.publicUrl;
+  const origin = req.get('origin');
+  // The Expo dev server serves the screens from another origin; only a listed one is trusted.
+  if (origin && ctx.config.corsOrigins.includes(origin)) return origin;
+  return `${req.protocol}://${req.get('host')}`;
+}
+
+export function authRoutes(ctx: AppContext): RouteSpec[] {
+  const limits = rateLimiters(ctx.config.rateLimits);
+  const sessions = new SessionService(ctx);
+  const users = new UsersService(ctx);
+  const resets = new PasswordResetService(ctx, users);
+  const cookie = { httpOnly: true, sameSite: 'strict', secure: ctx.config.production, path: REFRESH_COOKIE_PATH } as const;
+
+  function startSession(res: Response, user: User): SessionAnswer {
+    res.cookie(REFRESH_COOKIE, sessions.issue(user, 'refresh'), { ...cookie, maxAge: TOKEN_SECONDS.refresh * 1000 });
+    return { token: sessions.issue(user, 'access'), expiresIn: TOKEN_SECONDS.access, user: toAccountUser(user) };
+  }
+
+  return [
+    {
+      method: 'post',
+      path: '/auth/sign-up',
+      access: publicAccess,
+      rateLimit: limits.signUp,
+      handler: async (req, res) => {
+        const input = await parseInput(signUpSchema, req.body);
+        const user = await users.create({ ...input, role: 'rider' });
+        res.status(201).json(startSession(res, user));
+      },
+    },
+    {
+      method: 'post',
+      path: '/auth/sign-in',
+      access: publicAccess,
+      rateLimit: limits.signIn,
+      handler: async (req, res) => {
+        const { email, password } = await parseInput(signInSchema, req.body);
+        res.json(startSession(res, await users.signIn(email, password)));
+      },
+    },
+    {
+      method: 'post',
+      path: '/auth/refresh',
+      access: publicAccess,
+      handler: async (req, res) => {
+        const token: unknown = req.cookies?.[REFRESH_COOKIE];
+        const user = typeof token === 'string' ? await sessions.verify(token, 'refresh') : undefined;
+        if (!user) {
+          res.clearCookie(REFRESH_COOKIE, cookie);
+          throw new UnauthorizedError('Your session has ended; sign in again.', 'session-expired');
+        }
+        res.json(startSession(res, user));
+      },
+    },
+    {
+      method: 'post',
+      path: '/auth/sign-out',
+      access: anyRole,
+      handler: async (req, res) => {
+        await users.revokeTokens(currentUser(req).id);
+        res.clearCookie(REFRESH_COOKIE, cookie);
+        res.status(204).end();
+      },
+    },
+    {
+      method: 'post',
+      path: '/auth/reset-request',
+      access: publicAccess,
+      rateLimit: limits.reset,
+      handler: async (req, res) => {
+        const { email } = await parseInput(resetRequestSchema, req.body);
+        await resets.request(email, publicBaseUrl(ctx, req));
+        res.status(202).json({ message: 'If an account uses this e-mail, a reset link is on its way.' });
+      },
+    },
+    {
+      method: 'post',
+      path: '/auth/reset',
+      access: publicAccess,
+      rateLimit: limits.reset,
+      handler: async (req, res) => {
+        const { token, password } = await parseInput(resetSchema, req.body);
+        await resets.reset(token, password);
+        res.status(204).end();
+      },
+    },
+    {
+      method: 'get',
+      path: '/me',
+      access: anyRole,
+      handler: async (req, res) => {
+        const user = await users.find(currentUser(req).id);
+        if (!user) throw new UnauthorizedError();
+        res.json({ user: toAccountUser(user) });
+      },
+    },
+  ];
+}

@@ -1,0 +1,59 @@
+/**
+ * Session tokens. A short-lived access token goes in `Authorization: Bearer`; a long-lived refresh
+ * token lives in an httpOnly cookie and only buys new access tokens. Both are HS256 JWTs carrying
+ * the user's tokenVersion, which is checked against the database on every use, so raising it
+ * (sign-out, deactivation, password reset) revokes every token at once.
+ */
+import jwt from 'jsonwebtoken';
+import { AppContext } from '../context';
+import { User } from '../entities/user.entity';
+
+export type TokenKind = 'access' | 'refresh';
+
+export const TOKEN_SECONDS: Record<TokenKind, number> = {
+  access: 15 * 60,
+  // Long enough that a rider measuring in the garage over a week stays signed in.
+  refresh: 14 * 24 * 60 * 60,
+};
+
+const ISSUER = 'sagwright';
+
+export class SessionService {
+  constructor(private readonly ctx: Pick<AppContext, 'db' | 'now' | 'secrets'>) {}
+
+  private seconds(): number {
+    return Math.floor(this.ctx.now().getTime() / 1000);
+  }
+
+  issue(user: Pick<User, 'id' | 'tokenVersion'>, kind: TokenKind): string {
+    return jwt.sign({ ver: user.tokenVersion, iat: this.seconds() }, this.ctx.secrets.jwt, {
+      algorithm: 'HS256',
+      subject: String(user.id),
+      // The audience keeps a refresh token from passing as an access token and back.
+      audience: kind,
+      issuer: ISSUER,
+      expiresIn: TOKEN_SECONDS[kind],
+    });
+  }
+
+  /** The active user a token stands for, or undefined for any token that is not valid right now. */
+  async verify(token: string, kind: TokenKind): Promise<User | undefined> {
+    let claims: jwt.JwtPayload | string;
+    try {
+      claims = jwt.verify(token, this.ctx.secrets.jwt, {
+        algorithms: ['HS256'],
+        audience: kind,
+        issuer: ISSUER,
+        clockTimestamp: this.seconds(),
+      });
+    } catch {
+      return undefined;
+    }
+    if (typeof claims === 'string' || !Number.isInteger(claims.ver)) return undefined;
+    const id = Number(claims.sub);
+    if (!Number.isInteger(id)) return undefined;
+    const user = await this.ctx.db.read.getRepository(User).findOneBy({ id });
+    if (!user || !user.active || user.tokenVersion !== claims.ver) return undefined;
+    return user;
+  }
+}

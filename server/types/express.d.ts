@@ -1,0 +1,10 @@
+import type { AuthUser } from '../middleware/auth';
+
+declare global {
+  namespace Express {
+    interface Request {
+      /** Set by the guard of a signed-in route. */
+      user?: AuthUser;
+    }
+  }
+}

@@ -1,0 +1,55 @@
+/**
+ * Sags from the three readings. A loaded reading taken twice (pushed down and let rise, lifted and
+ * let settle) is averaged; half the spread is the friction band.
+ */
+
+import type { LengthReading, Readings } from '../types/sizing';
+
+export interface MeasuredSags {
+  staticSagMm: number;
+  riderSagMm: number;
+  /** Plus or minus; null for a single reading. */
+  staticBandMm: number | null;
+  riderBandMm: number | null;
+  staticSpreadMm: number | null;
+  riderSpreadMm: number | null;
+  /** A pair whose pushed reading is the longer one: friction cannot do that, the two were swapped or misread. */
+  swappedPairs: Array<'static' | 'rider'>;
+}
+
+/** What spoils a reading, for the measuring steps. */
+export const READING_PITFALLS: readonly string[] = [
+  'the side stand touching the ground',
+  'the helper leaning on the bike instead of only steadying it',
+  'the rider not in riding position with feet on the pegs',
+  'tyre pressures not set',
+];
+
+export function averageReading(reading: LengthReading): number {
+  return typeof reading === 'number' ? reading : (reading.pushedMm + reading.liftedMm) / 2;
+}
+
+function spreadOf(reading: LengthReading): number | null {
+  return typeof reading === 'number' ? null : Math.abs(reading.liftedMm - reading.pushedMm);
+}
+
+function isSwapped(reading: LengthReading): boolean {
+  return typeof reading !== 'number' && reading.pushedMm > reading.liftedMm;
+}
+
+export function measureSags(readings: Readings): MeasuredSags {
+  const staticSpreadMm = spreadOf(readings.staticMm);
+  const riderSpreadMm = spreadOf(readings.riderMm);
+  const swappedPairs: Array<'static' | 'rider'> = [];
+  if (isSwapped(readings.staticMm)) swappedPairs.push('static');
+  if (isSwapped(readings.riderMm)) swappedPairs.push('rider');
+  return {
+    staticSagMm: readings.extendedMm - averageReading(readings.staticMm),
+    riderSagMm: readings.extendedMm - averageReading(readings.riderMm),
+    staticBandMm: staticSpreadMm === null ? null : staticSpreadMm / 2,
+    riderBandMm: riderSpreadMm === null ? null : riderSpreadMm / 2,
+    staticSpreadMm,
+    riderSpreadMm,
+    swappedPairs,
+  };
+}

@@ -1,0 +1,31 @@
+/**
+ * Ride frequency of the sprung mass on one end (section 5g) and how a spring change moves the
+ * damping ratio with the same damper (section 5h). Tyre compliance is ignored, so the figures
+ * run a few per cent high.
+ */
+
+export const RIDE_FREQUENCY_NOTE =
+  'Tyre compliance is ignored: the real ride frequency is about 5 % lower.';
+
+export function computeRideFrequencyHz(wheelRateNmm: number, sprungMassKg: number): number | null {
+  if (!(wheelRateNmm > 0) || !(sprungMassKg > 0)) return null;
+  return Math.sqrt((wheelRateNmm * 1000) / sprungMassKg) / (2 * Math.PI);
+}
+
+/** zeta = c / (2*sqrt(k*m)): with the same damper and mass, zeta_new / zeta_old = sqrt(k_old / k_new). */
+export function computeDampingRatioScale(oldWheelRateNmm: number, newWheelRateNmm: number): number | null {
+  if (!(oldWheelRateNmm > 0) || !(newWheelRateNmm > 0)) return null;
+  return Math.sqrt(oldWheelRateNmm / newWheelRateNmm);
+}
+
+/** A stiffer spring lowers zeta, so start with more rebound damping; a softer one, less. */
+export function chooseReboundHint(
+  oldWheelRateNmm: number,
+  newWheelRateNmm: number,
+  sameWithinPct: number,
+): 'more' | 'less' | 'same' {
+  const change = (newWheelRateNmm / oldWheelRateNmm - 1) * 100;
+  if (change > sameWithinPct) return 'more';
+  if (change < -sameWithinPct) return 'less';
+  return 'same';
+}

@@ -1,0 +1,88 @@
+/**
+ * Rear shock: a constant leverage ratio LR = wheel travel / shock stroke, or a linkage curve x(y).
+ * By virtual work the wheel load W balances the shock force F through dx/dy: W = F * x'(y), where
+ * F is the spring force plus the gas force (which acts as extra preload of F_gas/k).
+ */
+
+import type { RearRequest } from '../types/sizing';
+import { acceptFit, clampSag, type EndModel } from './end-model';
+import {
+  buildLinkageCurve,
+  curvatureAt,
+  findFirstEquilibrium,
+  isRegressive,
+  shockAt,
+  slopeAt,
+} from './linkage-curve';
+import { springDeflection, springForce, springRateAt, type SpringLaw } from './spring-law';
+
+export function makeShockModel(rear: RearRequest): EndModel {
+  return rear.linkage && rear.linkage.length >= 2 ? makeLinkageModel(rear) : makeConstantRatioModel(rear);
+}
+
+function makeConstantRatioModel(rear: RearRequest): EndModel {
+  const lr = rear.wheelTravelMm / rear.shockStrokeMm;
+  const gas = rear.gasForceN ?? 0;
+  const travelMm = rear.wheelTravelMm;
+  return {
+    end: 'rear',
+    travelMm,
+    springStrokeMm: rear.shockStrokeMm,
+    springsPerEnd: 1,
+    regressive: false,
+    loadAtSag: (spring, preloadMm, sagMm) => (springForce(spring, preloadMm + sagMm / lr) + gas) / lr,
+    sagAtLoad: (spring, preloadMm, loadN) =>
+      clampSag(lr * (springDeflection(spring, loadN * lr - gas) - preloadMm), travelMm),
+    preloadForSag: (spring, loadN, sagMm) => springDeflection(spring, loadN * lr - gas) - sagMm / lr,
+    springDeflectionAt: (preloadMm, sagMm) => preloadMm + sagMm / lr,
+    wheelRateAt: (spring, preloadMm, sagMm) => springRateAt(spring, preloadMm + sagMm / lr) / (lr * lr),
+    fitSingleRate(sagA, loadA, sagB, loadB) {
+      const rate = ((loadB - loadA) * lr * lr) / (sagB - sagA);
+      return acceptFit(rate, (loadA * lr - gas) / rate - sagA / lr);
+    },
+  };
+}
+
+function makeLinkageModel(rear: RearRequest): EndModel {
+  const curve = buildLinkageCurve(rear.linkage ?? []);
+  const gas = rear.gasForceN ?? 0;
+  const travelMm = rear.wheelTravelMm;
+  const loadAtSag = (spring: SpringLaw, preloadMm: number, sagMm: number): number =>
+    (springForce(spring, preloadMm + shockAt(curve, sagMm)) + gas) * slopeAt(curve, sagMm);
+  return {
+    end: 'rear',
+    travelMm,
+    springStrokeMm: shockAt(curve, travelMm),
+    springsPerEnd: 1,
+    regressive: isRegressive(curve),
+    loadAtSag,
+    sagAtLoad: (spring, preloadMm, loadN) =>
+      findFirstEquilibrium(curve, (y) => loadAtSag(spring, preloadMm, y), loadN),
+    preloadForSag(spring, loadN, sagMm) {
+      const slope = slopeAt(curve, sagMm);
+      if (!(slope > 0)) return null;
+      return springDeflection(spring, loadN / slope - gas) - shockAt(curve, sagMm);
+    },
+    springDeflectionAt: (preloadMm, sagMm) => preloadMm + shockAt(curve, sagMm),
+    wheelRateAt(spring, preloadMm, sagMm) {
+      const deflection = preloadMm + shockAt(curve, sagMm);
+      const slope = slopeAt(curve, sagMm);
+      return (
+        springRateAt(spring, deflection) * slope * slope +
+        (springForce(spring, deflection) + gas) * curvatureAt(curve, sagMm)
+      );
+    },
+    fitSingleRate(sagA, loadA, sagB, loadB) {
+      // W = q*x' + k*x*x' at both sags, with q = k*p + F_gas: a 2x2 linear system in k and q.
+      const sa = slopeAt(curve, sagA);
+      const sb = slopeAt(curve, sagB);
+      const xa = shockAt(curve, sagA);
+      const xb = shockAt(curve, sagB);
+      const det = sa * sb * (xb - xa);
+      if (det === 0) return null;
+      const rate = (sa * loadB - sb * loadA) / det;
+      const q = (loadA * xb * sb - loadB * xa * sa) / det;
+      return acceptFit(rate, (q - gas) / rate);
+    },
+  };
+}

@@ -1,0 +1,305 @@
+/**
+ * Everything the engine answers for one end (section 5), in either mode: from the weights alone,
+ * or from readings with the loads calibrated on the installed spring.
+ */
+
+import type {
+  CatalogueSpring,
+  EndKind,
+  EndResult,
+  EndWindowsPct,
+  FrontRequest,
+  LoadsN,
+  PreloadAdvice,
+  RearRequest,
+  SizingContext,
+  SizingWarning,
+  TargetUsed,
+  Verdict,
+} from '../types/sizing';
+import { computePreloadRange, describeAdjustment } from './adjuster';
+import { rankCandidates } from './candidates';
+import type { EndModel } from './end-model';
+import { computeImpliedRate, isRateMismatch } from './implied-rate';
+import { calibrateLoads, computeSprungMassKg } from './loads';
+import { advisePreload } from './preload-advice';
+import { measureSags, type MeasuredSags } from './readings';
+import {
+  chooseReboundHint,
+  computeDampingRatioScale,
+  computeRideFrequencyHz,
+  RIDE_FREQUENCY_NOTE,
+} from './ride-frequency';
+import { choosePreviewDuration, describePreviewCurve, PREVIEW_NOTE } from './ride-preview';
+import { isDualRate, makeSpringLaw, secantRate, type SpringLaw } from './spring-law';
+import { areWindowsUsable, resolveSagWindows, toPercent, type SagWindows } from './targets';
+import { aimPreload, describeVerdict } from './verdict';
+import {
+  noteForkAir,
+  noteGasForceUnknown,
+  noteSingleRateEquivalent,
+  noteWeightsMode,
+  warnAdjusterRange,
+  warnBottomedOut,
+  warnCoilBind,
+  warnFrictionBand,
+  warnImpliedRate,
+  warnNoCandidate,
+  warnNoRiderLoad,
+  warnNoRiderSag,
+  warnRegressiveLinkage,
+  warnSmallStaticSag,
+  warnStaticReadingToppedOut,
+  warnSwappedPair,
+  warnTargetInvalid,
+  warnToppedOut,
+} from './warnings';
+
+export interface EndInput {
+  end: EndKind;
+  model: EndModel;
+  request: FrontRequest | RearRequest;
+  intakeLoads: LoadsN;
+  windowsPct: EndWindowsPct;
+  springs: readonly CatalogueSpring[];
+  dampingRatio: number;
+  /** Request-level warnings every end repeats. */
+  sharedWarnings: readonly SizingWarning[];
+}
+
+export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
+  const { end, model, request, intakeLoads } = input;
+  const thresholds = context.thresholds;
+  const spring = makeSpringLaw(request.rateNmm, request.secondRateNmm, request.breakMm);
+  const currentPreloadMm = request.preloadMm;
+  const travelMm = model.travelMm;
+  const warnings: SizingWarning[] = [...input.sharedWarnings];
+  noteModelLimits(end, request, spring, model, warnings);
+  if (intakeLoads.riderN <= 0) warnings.push(warnNoRiderLoad(end));
+
+  const measured = request.readings ? measureSags(request.readings) : null;
+  const calibrated = measured
+    ? calibrateReadings(end, model, spring, currentPreloadMm, measured, thresholds.frictionSpreadMm[end], warnings)
+    : null;
+  if (!measured) warnings.push(noteWeightsMode());
+  const loads = calibrated ?? intakeLoads;
+  const intakeTotalN = intakeLoads.staticN + intakeLoads.riderN;
+
+  const predictedStatic = model.sagAtLoad(spring, currentPreloadMm, intakeLoads.staticN);
+  const predictedRider = model.sagAtLoad(spring, currentPreloadMm, intakeTotalN);
+  const staticSagMm = measured ? measured.staticSagMm : predictedStatic;
+  const riderSagMm = measured ? measured.riderSagMm : predictedRider;
+  if (!measured) flagPredictedSags(predictedStatic, predictedRider, thresholds.smallStaticSagMm, warnings);
+
+  const windows = resolveSagWindows(input.windowsPct, travelMm, request.target);
+  const usable = areWindowsUsable(windows);
+  if (!usable) warnings.push(warnTargetInvalid());
+
+  const installedRateNmm = secantRate(
+    spring,
+    model.springDeflectionAt(currentPreloadMm, staticSagMm ?? 0),
+    model.springDeflectionAt(currentPreloadMm, riderSagMm ?? staticSagMm ?? 0),
+  );
+
+  const implied = measured ? computeImpliedRate(model, measured, intakeLoads) : null;
+  const impliedRateNmm = implied ? implied.rateNmm : null;
+  if (impliedRateNmm !== null && isRateMismatch(impliedRateNmm, installedRateNmm, thresholds.impliedRateMismatchPct)) {
+    const frictionSuspect = warnings.some((w) => w.code === 'friction-band-large');
+    warnings.push(warnImpliedRate(end, impliedRateNmm, installedRateNmm, frictionSuspect));
+  }
+
+  const idealRateFor = (l: LoadsN): number | null => {
+    if (!usable) return null;
+    const fit = model.fitSingleRate(windows.staticMiddleMm, l.staticN, windows.riderMiddleMm, l.staticN + l.riderN);
+    return fit ? fit.rateNmm : null;
+  };
+  const idealRateNmm = idealRateFor(loads);
+
+  const preloadRangeMm = computePreloadRange(request.adjuster, currentPreloadMm, thresholds.minCaptivePreloadMm);
+  let verdict: Verdict | null = null;
+  let aimRiderSagMm = windows.riderMiddleMm;
+  let neededPreloadMm: number | null = null;
+  let preload: PreloadAdvice | null = null;
+  if (usable) {
+    const aim = aimPreload(model, spring, loads, windows, preloadRangeMm);
+    verdict = aim.verdict;
+    aimRiderSagMm = aim.aimRiderSagMm;
+    neededPreloadMm = aim.neededPreloadMm;
+    if (neededPreloadMm !== null) {
+      preload = advisePreload(model, spring, request, loads, neededPreloadMm, preloadRangeMm, context.thresholds, warnings);
+      if (verdict === 'preload-out-of-range' || preload.limitedByRange) {
+        warnings.push(warnAdjusterRange(neededPreloadMm, preloadRangeMm));
+      }
+    }
+  }
+
+  const ranked = rankCandidates(
+    model,
+    input.springs,
+    loads,
+    {
+      adjuster: request.adjuster,
+      currentPreloadMm,
+      preloadRangeMm,
+      riderTargetMm: windows.riderMiddleMm,
+      staticTargetMm: windows.staticMiddleMm,
+    },
+    thresholds,
+  );
+  if (ranked.coilBound > 0) warnings.push(warnCoilBind(ranked.coilBound, thresholds.coilBindMarginMm));
+  if (!ranked.best) warnings.push(warnNoCandidate(input.springs.length));
+
+  // Both springs are rated where they would ride: the current one at its aimed rider sag.
+  const sprungMassKg = computeSprungMassKg(loads);
+  const oldWheelRate = model.wheelRateAt(spring, neededPreloadMm ?? currentPreloadMm, aimRiderSagMm);
+  const pick = ranked.inStock ?? ranked.best;
+  const newWheelRate =
+    pick && pick.preloadMm !== null
+      ? model.wheelRateAt(
+          makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm),
+          pick.preloadMm,
+          windows.riderMiddleMm,
+        )
+      : null;
+  const currentHz = computeRideFrequencyHz(oldWheelRate, sprungMassKg);
+  const recommendedHz = newWheelRate === null ? null : computeRideFrequencyHz(newWheelRate, sprungMassKg);
+  const scale = newWheelRate === null ? null : computeDampingRatioScale(oldWheelRate, newWheelRate);
+  const reboundHint =
+    scale === null || newWheelRate === null
+      ? null
+      : chooseReboundHint(oldWheelRate, newWheelRate, thresholds.sameRatePct);
+
+  const zeta = input.dampingRatio;
+  const oldWn = currentHz === null ? null : 2 * Math.PI * currentHz;
+  const newWn = recommendedHz === null || scale === null ? null : 2 * Math.PI * recommendedHz;
+  const spans = [oldWn, newWn].filter((w): w is number => w !== null);
+
+  return {
+    end,
+    mode: measured ? 'readings' : 'weights',
+    travelMm,
+    staticSagMm,
+    riderSagMm,
+    staticSagPct: staticSagMm === null ? null : toPercent(staticSagMm, travelMm),
+    riderSagPct: riderSagMm === null ? null : toPercent(riderSagMm, travelMm),
+    frictionBandMm:
+      measured && (measured.staticBandMm !== null || measured.riderBandMm !== null)
+        ? { static: measured.staticBandMm, rider: measured.riderBandMm }
+        : null,
+    target: describeTarget(windows, travelMm, aimRiderSagMm, context),
+    loads: {
+      staticN: loads.staticN,
+      riderN: loads.riderN,
+      source: calibrated ? 'calibrated' : 'intake',
+      calibrated,
+      intake: intakeLoads,
+    },
+    installedRateNmm,
+    impliedRateNmm,
+    impliedRateBandNmm: implied ? implied.bandNmm : null,
+    idealRateNmm,
+    fromWeights: {
+      staticSagMm: predictedStatic,
+      riderSagMm: predictedRider,
+      idealRateNmm: calibrated ? idealRateFor(intakeLoads) : idealRateNmm,
+    },
+    verdict,
+    verdictText: describeVerdict(
+      verdict,
+      installedRateNmm,
+      idealRateNmm,
+      preload ? describeAdjustment(request.adjuster.kind, preload) : '',
+      neededPreloadMm,
+      preloadRangeMm,
+    ),
+    preload,
+    rideFrequencyHz: { current: currentHz, recommended: recommendedHz, note: RIDE_FREQUENCY_NOTE },
+    dampingRatioScale: scale,
+    reboundHint,
+    recommendation: { inStock: ranked.inStock, best: ranked.best, candidates: ranked.candidates },
+    preview: {
+      assumedDampingRatio: zeta,
+      old: oldWn === null ? null : describePreviewCurve(oldWn, zeta),
+      new: newWn === null || scale === null ? null : describePreviewCurve(newWn, zeta * scale),
+      durationS: spans.length > 0 ? choosePreviewDuration(...spans) : null,
+      note: PREVIEW_NOTE,
+    },
+    warnings,
+  };
+}
+
+function noteModelLimits(
+  end: EndKind,
+  request: FrontRequest | RearRequest,
+  spring: SpringLaw,
+  model: EndModel,
+  warnings: SizingWarning[],
+): void {
+  if (end === 'front') warnings.push(noteForkAir());
+  else if ((request as RearRequest).gasForceN === undefined) warnings.push(noteGasForceUnknown());
+  if (isDualRate(spring)) warnings.push(noteSingleRateEquivalent());
+  if (model.regressive) warnings.push(warnRegressiveLinkage());
+}
+
+function calibrateReadings(
+  end: EndKind,
+  model: EndModel,
+  spring: SpringLaw,
+  preloadMm: number,
+  measured: MeasuredSags,
+  spreadLimitMm: number,
+  warnings: SizingWarning[],
+): LoadsN | null {
+  if (measured.staticSpreadMm !== null && measured.staticSpreadMm > spreadLimitMm) {
+    warnings.push(warnFrictionBand('static', measured.staticSpreadMm, spreadLimitMm));
+  }
+  if (measured.riderSpreadMm !== null && measured.riderSpreadMm > spreadLimitMm) {
+    warnings.push(warnFrictionBand('rider', measured.riderSpreadMm, spreadLimitMm));
+  }
+  for (const which of measured.swappedPairs) warnings.push(warnSwappedPair(which));
+  if (!(measured.staticSagMm > 0)) {
+    warnings.push(warnStaticReadingToppedOut(end));
+    return null;
+  }
+  if (!(measured.riderSagMm > measured.staticSagMm)) {
+    warnings.push(warnNoRiderSag());
+    return null;
+  }
+  const loads = calibrateLoads(model, spring, preloadMm, measured.staticSagMm, measured.riderSagMm);
+  if (!loads) warnings.push(warnNoRiderSag());
+  return loads;
+}
+
+function flagPredictedSags(
+  staticSagMm: number | null,
+  riderSagMm: number | null,
+  smallStaticSagMm: number,
+  warnings: SizingWarning[],
+): void {
+  if (staticSagMm === 0) warnings.push(warnToppedOut('Predicted static sag'));
+  else if (staticSagMm === null) warnings.push(warnBottomedOut('Predicted static sag'));
+  else if (staticSagMm < smallStaticSagMm) warnings.push(warnSmallStaticSag(staticSagMm));
+  if (riderSagMm === 0) warnings.push(warnToppedOut('Predicted rider sag'));
+  else if (riderSagMm === null) warnings.push(warnBottomedOut('Predicted rider sag'));
+}
+
+function describeTarget(
+  windows: SagWindows,
+  travelMm: number,
+  aimRiderSagMm: number,
+  context: SizingContext,
+): TargetUsed {
+  const pct = (r: { min: number; max: number }) => ({ min: toPercent(r.min, travelMm), max: toPercent(r.max, travelMm) });
+  return {
+    discipline: context.profile.discipline,
+    label: context.profile.label,
+    source: windows.source,
+    riderSagMm: windows.riderSagMm,
+    staticSagMm: windows.staticSagMm,
+    riderSagPct: pct(windows.riderSagMm),
+    staticSagPct: pct(windows.staticSagMm),
+    riderMiddleMm: windows.riderMiddleMm,
+    staticMiddleMm: windows.staticMiddleMm,
+    aimRiderSagMm,
+  };
+}

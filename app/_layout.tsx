@@ -2,11 +2,11 @@ import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { View } from 'react-native';
 
-import { AppFrame, type NavItem } from '@/components/ui/app-frame';
+import { AppFrame } from '@/components/ui/app-frame';
+import { ROLE_LABELS } from '@/session/access';
+import { navItemsFor } from '@/session/nav-items';
+import { SessionProvider, useSession } from '@/session/session-provider';
 import { fontFaces, useTheme } from '@/theme';
-
-/** Each role's area adds its entry here once it exists. */
-const NAV_ITEMS: readonly NavItem[] = [{ href: '/', label: 'Home' }];
 
 export default function RootLayout() {
   const { colors } = useTheme();
@@ -24,7 +24,19 @@ export default function RootLayout() {
   }
 
   return (
-    <AppFrame items={NAV_ITEMS}>
+    <SessionProvider>
+      <FramedApp />
+    </SessionProvider>
+  );
+}
+
+/** The frame offers what the session allows; while it is being restored, no destinations yet. */
+function FramedApp() {
+  const { status, user, signOut } = useSession();
+  const items = status === 'loading' ? [] : navItemsFor(user?.role ?? null);
+  const account = user ? { name: user.name, role: ROLE_LABELS[user.role], onSignOut: signOut } : undefined;
+  return (
+    <AppFrame items={items} account={account}>
       <Slot />
     </AppFrame>
   );

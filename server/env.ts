@@ -48,6 +48,11 @@ export interface ServerConfig {
   smtp?: SmtpSettings;
   mailFrom: string;
   rateLimits: RateLimits;
+  /**
+   * Marks the refresh cookie Secure. On by default only when the public address is https: a
+   * browser drops a Secure cookie over the plain HTTP of a shop's local network.
+   */
+  secureCookies: boolean;
 }
 
 const root = path.resolve(__dirname, '..');
@@ -91,6 +96,7 @@ function readSmtp(env: Record<string, string | undefined>): SmtpSettings | undef
 
 export function readConfig(env: Record<string, string | undefined> = process.env): ServerConfig {
   const production = env.NODE_ENV === 'production';
+  const publicUrl = readPublicUrl(env.SAGWRIGHT_PUBLIC_URL);
   return {
     port: readPort(env.PORT),
     dataDir: path.resolve(env.DATA_DIR ?? path.join(root, 'data')),
@@ -102,9 +108,10 @@ export function readConfig(env: Record<string, string | undefined> = process.env
       ? []
       : (env.SAGWRIGHT_DEV_ORIGINS ?? 'http://localhost:8081').split(',').map((o) => o.trim()).filter(Boolean),
     jwtSecret: readJwtSecret(env.SAGWRIGHT_JWT_SECRET),
-    publicUrl: readPublicUrl(env.SAGWRIGHT_PUBLIC_URL),
+    publicUrl,
     smtp: readSmtp(env),
     mailFrom: env.SAGWRIGHT_MAIL_FROM || 'Sagwright <no-reply@sagwright.invalid>',
     rateLimits: DEFAULT_RATE_LIMITS,
+    secureCookies: env.SAGWRIGHT_SECURE_COOKIES ? env.SAGWRIGHT_SECURE_COOKIES === '1' : publicUrl?.startsWith('https:') === true,
   };
 }

@@ -33,7 +33,7 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
   const sessions = new SessionService(ctx);
   const users = new UsersService(ctx);
   const resets = new PasswordResetService(ctx, users);
-  const cookie = { httpOnly: true, sameSite: 'strict', secure: ctx.config.production, path: REFRESH_COOKIE_PATH } as const;
+  const cookie = { httpOnly: true, sameSite: 'strict', secure: ctx.config.secureCookies, path: REFRESH_COOKIE_PATH } as const;
 
   function startSession(res: Response, user: User): SessionAnswer {
     res.cookie(REFRESH_COOKIE, sessions.issue(user, 'refresh'), { ...cookie, maxAge: TOKEN_SECONDS.refresh * 1000 });

@@ -5,6 +5,7 @@
 
 import { array, lazy, mixed, number, object, string, ValidationError, type TestContext } from 'yup';
 import type { SizingRequest } from '../types/sizing';
+import { toFieldErrors } from './field-errors';
 import { parseUserNumber } from '../units/parse-number';
 
 type Bounds = [number, number];
@@ -84,6 +85,7 @@ const adjusterSchema = object({
     optional: true,
   }),
 })
+  .default(undefined)
   .required('The preload adjuster is missing: say whether it is threaded, stepped or a spacer.')
   .test('adjuster-range', function (adjuster) {
     if (!adjuster) return true;
@@ -262,6 +264,7 @@ const bikeSchema = object({
   unsprungFrontKg: quantity('Unsprung front mass', [0, 150], ' kg', 'give the mass of the front wheel, tyre, brakes and fork lowers'),
   unsprungRearKg: quantity('Unsprung rear mass', [0, 150], ' kg', 'give the mass of the rear wheel, tyre, brake and the swingarm share'),
 })
+  .default(undefined)
   .required('The bike is missing: give its mass and weight shares.')
   .test('sprung-mass', function (bike) {
     if (!bike || !isNum(bike.massKg) || !isNum(bike.frontShare)) return true;
@@ -283,7 +286,9 @@ const riderSchema = object({
   luggageRearShare: quantity('Luggage rear share', [0, 1.5], '', 'give the fraction on the rear wheel: about 0.9 to 1 for a passenger, 1.1 to 1.3 for a top box', {
     optional: true,
   }),
-}).required('The rider is missing: give the rider, gear and luggage masses.');
+})
+  .default(undefined)
+  .required('The rider is missing: give the rider, gear and luggage masses.');
 
 export const sizingRequestSchema = object({
   discipline: string()
@@ -301,22 +306,20 @@ export const sizingRequestSchema = object({
 })
   .required('The request body is missing: send the bike, the rider and at least one end.')
   .typeError('The request body must be an object with the bike, the rider and at least one end.')
-  .test('one-end', 'Give the front, the rear or both ends to size.', (body) => !body || Boolean(body.front || body.rear));
+  .test('one-end', function (body) {
+    if (!body || body.front || body.rear) return true;
+    return this.createError({ path: 'ends', message: 'Give the front, the rear or both ends to size.' });
+  });
 
 export type SizingValidation = { ok: true; value: SizingRequest } | { ok: false; fields: Record<string, string> };
 
-/** One message per bad field path, e.g. "front.readings.staticMm"; the root's own errors under "body". */
+/** One message per bad field path, e.g. "front.readings.staticMm"; a missing end under "ends", the body as a whole under "". */
 export function validateSizingRequest(body: unknown): SizingValidation {
   try {
     const value = sizingRequestSchema.validateSync(body, { abortEarly: false, stripUnknown: true });
     return { ok: true, value: value as unknown as SizingRequest };
   } catch (error) {
     if (!(error instanceof ValidationError)) throw error;
-    const fields: Record<string, string> = {};
-    for (const inner of error.inner.length > 0 ? error.inner : [error]) {
-      const path = inner.path || (inner.type === 'one-end' ? 'ends' : 'body');
-      if (!(path in fields)) fields[path] = inner.message;
-    }
-    return { ok: false, fields };
+    return { ok: false, fields: toFieldErrors(error) };
   }
 }

@@ -44,6 +44,7 @@ export function planAdjustment(
   const changeMm = neededPreloadMm - currentPreloadMm;
   const changeUnits = changeMm / adjuster.mmPerUnit;
   const minPosition = adjuster.minPosition ?? 0;
+  const exact = adjuster.position + changeUnits;
   const wanted = adjuster.position + Math.round(changeUnits / resolution) * resolution;
   const position = Math.min(adjuster.maxPosition, Math.max(minPosition, wanted));
   // Float noise from the multiply would otherwise show as 1.2500000000000002 turns.
@@ -54,7 +55,8 @@ export function planAdjustment(
     roundedChangeUnits,
     roundedChangeMm: roundedChangeUnits * adjuster.mmPerUnit,
     position: roundToNano(position),
-    limitedByRange: position !== wanted,
+    // Rounding onto an end stop is still rounding; only a change the adjuster cannot make is limited.
+    limitedByRange: exact < minPosition - 1e-9 || exact > adjuster.maxPosition + 1e-9,
     direction: roundedChangeUnits > 0 ? 'add' : roundedChangeUnits < 0 ? 'remove' : 'none',
     unit: UNIT_OF[adjuster.kind],
   };

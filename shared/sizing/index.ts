@@ -9,8 +9,6 @@ export {
   stepResponseAt,
   type StepKind,
 } from './ride-preview';
-export { computeIntakeLoads, STANDARD_GRAVITY } from './loads';
-export { averageReading, measureSags, READING_PITFALLS } from './readings';
-export { computeRideFrequencyHz } from './ride-frequency';
-export type * from '../types/sizing';
+export { averageReading, measureSags, READING_PITFALLS, type MeasuredSags } from './readings';
 export { buildWarningThresholds, SETTING_KEYS, type EngineSettingValue } from './settings';
+export type * from '../types/sizing';

@@ -19,7 +19,7 @@ export interface LinkageCurve {
 /** Steps per segment in the walk for the first equilibrium: fine enough that a crossing is not stepped over. */
 const WALK_STEPS_PER_SEGMENT = 16;
 
-export function buildLinkageCurve(points: ReadonlyArray<readonly [number, number]>): LinkageCurve {
+export function buildLinkageCurve(points: readonly (readonly [number, number])[]): LinkageCurve {
   const n = points.length;
   const wheelMm = new Float64Array(n);
   const shockMm = new Float64Array(n);

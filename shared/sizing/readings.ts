@@ -14,7 +14,7 @@ export interface MeasuredSags {
   staticSpreadMm: number | null;
   riderSpreadMm: number | null;
   /** A pair whose pushed reading is the longer one: friction cannot do that, the two were swapped or misread. */
-  swappedPairs: Array<'static' | 'rider'>;
+  swappedPairs: ('static' | 'rider')[];
 }
 
 /** What spoils a reading, for the measuring steps. */
@@ -40,7 +40,7 @@ function isSwapped(reading: LengthReading): boolean {
 export function measureSags(readings: Readings): MeasuredSags {
   const staticSpreadMm = spreadOf(readings.staticMm);
   const riderSpreadMm = spreadOf(readings.riderMm);
-  const swappedPairs: Array<'static' | 'rider'> = [];
+  const swappedPairs: ('static' | 'rider')[] = [];
   if (isSwapped(readings.staticMm)) swappedPairs.push('static');
   if (isSwapped(readings.riderMm)) swappedPairs.push('rider');
   return {

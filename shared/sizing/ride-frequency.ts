@@ -8,8 +8,8 @@ export const RIDE_FREQUENCY_NOTE =
   'Tyre compliance is ignored: the real ride frequency is about 5 % lower.';
 
 export function computeRideFrequencyHz(wheelRateNmm: number, sprungMassKg: number): number | null {
-  if (!(wheelRateNmm > 0) || !(sprungMassKg > 0)) return null;
-  return Math.sqrt((wheelRateNmm * 1000) / sprungMassKg) / (2 * Math.PI);
+  const hz = Math.sqrt((wheelRateNmm * 1000) / sprungMassKg) / (2 * Math.PI);
+  return wheelRateNmm > 0 && sprungMassKg > 0 && Number.isFinite(hz) ? hz : null;
 }
 
 /** zeta = c / (2*sqrt(k*m)): with the same damper and mass, zeta_new / zeta_old = sqrt(k_old / k_new). */

@@ -21,16 +21,10 @@ import { computePreloadRange, describeAdjustment } from './adjuster';
 import { rankCandidates } from './candidates';
 import type { EndModel } from './end-model';
 import { computeImpliedRate, isRateMismatch } from './implied-rate';
-import { calibrateLoads, computeSprungMassKg } from './loads';
+import { calibrateLoads } from './loads';
 import { advisePreload } from './preload-advice';
 import { measureSags, type MeasuredSags } from './readings';
-import {
-  chooseReboundHint,
-  computeDampingRatioScale,
-  computeRideFrequencyHz,
-  RIDE_FREQUENCY_NOTE,
-} from './ride-frequency';
-import { choosePreviewDuration, describePreviewCurve, PREVIEW_NOTE } from './ride-preview';
+import { assessRide } from './ride-assessment';
 import { isDualRate, makeSpringLaw, secantRate, type SpringLaw } from './spring-law';
 import { areWindowsUsable, resolveSagWindows, toPercent, type SagWindows } from './targets';
 import { aimPreload, describeVerdict } from './verdict';
@@ -149,30 +143,15 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
   if (ranked.coilBound > 0) warnings.push(warnCoilBind(ranked.coilBound, thresholds.coilBindMarginMm));
   if (!ranked.best) warnings.push(warnNoCandidate(input.springs.length));
 
-  // Both springs are rated where they would ride: the current one at its aimed rider sag.
-  const sprungMassKg = computeSprungMassKg(loads);
-  const oldWheelRate = model.wheelRateAt(spring, neededPreloadMm ?? currentPreloadMm, aimRiderSagMm);
-  const pick = ranked.inStock ?? ranked.best;
-  const newWheelRate =
-    pick && pick.preloadMm !== null
-      ? model.wheelRateAt(
-          makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm),
-          pick.preloadMm,
-          windows.riderMiddleMm,
-        )
-      : null;
-  const currentHz = computeRideFrequencyHz(oldWheelRate, sprungMassKg);
-  const recommendedHz = newWheelRate === null ? null : computeRideFrequencyHz(newWheelRate, sprungMassKg);
-  const scale = newWheelRate === null ? null : computeDampingRatioScale(oldWheelRate, newWheelRate);
-  const reboundHint =
-    scale === null || newWheelRate === null
-      ? null
-      : chooseReboundHint(oldWheelRate, newWheelRate, thresholds.sameRatePct);
-
-  const zeta = input.dampingRatio;
-  const oldWn = currentHz === null ? null : 2 * Math.PI * currentHz;
-  const newWn = recommendedHz === null || scale === null ? null : 2 * Math.PI * recommendedHz;
-  const spans = [oldWn, newWn].filter((w): w is number => w !== null);
+  const ride = assessRide(
+    model,
+    loads,
+    { spring, preloadMm: neededPreloadMm ?? currentPreloadMm, riderSagMm: aimRiderSagMm },
+    ranked.inStock ?? ranked.best,
+    windows.riderMiddleMm,
+    input.dampingRatio,
+    thresholds.sameRatePct,
+  );
 
   return {
     end,
@@ -213,17 +192,8 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
       preloadRangeMm,
     ),
     preload,
-    rideFrequencyHz: { current: currentHz, recommended: recommendedHz, note: RIDE_FREQUENCY_NOTE },
-    dampingRatioScale: scale,
-    reboundHint,
     recommendation: { inStock: ranked.inStock, best: ranked.best, candidates: ranked.candidates },
-    preview: {
-      assumedDampingRatio: zeta,
-      old: oldWn === null ? null : describePreviewCurve(oldWn, zeta),
-      new: newWn === null || scale === null ? null : describePreviewCurve(newWn, zeta * scale),
-      durationS: spans.length > 0 ? choosePreviewDuration(...spans) : null,
-      note: PREVIEW_NOTE,
-    },
+    ...ride,
     warnings,
   };
 }

@@ -72,7 +72,7 @@ export function describeVerdict(
   const ideal = idealRateNmm === null ? '' : `; about ${formatNumber(idealRateNmm, 1)} N/mm would`;
   switch (verdict) {
     case 'keep':
-      return `Keep the ${rate} and ${adjustment}.`;
+      return adjustment ? `Keep the ${rate} and ${adjustment}.` : `Keep the ${rate}.`;
     case 'too-soft':
       return `The ${rate} is too soft: no preload puts both sags in their windows${ideal}.`;
     case 'too-stiff':

@@ -233,7 +233,7 @@ export interface PreloadAdvice {
   roundedChangeMm: number;
   /** Absolute adjuster setting after the rounded change. */
   position: number;
-  /** The rounded setting was held at the adjuster's end stop. */
+  /** The change needs more than the adjuster gives; the setting stops at its end. */
   limitedByRange: boolean;
   rangeMm: RangeMm;
   riderSagAfterMm: number | null;

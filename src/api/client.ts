@@ -1,10 +1,26 @@
 /**
- * The one way the app talks to the server. It owns the base URL, the auth header,
+ * The one way the app talks to the server. It owns the base URL, the session's access token,
  * JSON in both directions and turning every failure into an `ApiError`.
+ *
+ * The access token lives only in memory. When the server answers 401 `unauthorized` (the token
+ * expired), the client renews it once from the httpOnly refresh cookie and repeats the request;
+ * requests that fail together share one renewal. When renewal is refused the session has ended,
+ * and the listeners given to `subscribeToSession` hear `null`.
  */
+import type { SessionAnswer } from '@shared/types/account';
 
-/** Same origin: the Express server serves both the app and `/api`. */
-export const API_BASE_URL = '/api';
+/**
+ * Same origin unless told otherwise: the Express server serves both the app and `/api`. The Expo
+ * dev server (`npm run web`) runs elsewhere and names the API's origin in EXPO_PUBLIC_API_URL.
+ */
+export const API_BASE_URL = `${process.env.EXPO_PUBLIC_API_URL ?? ''}/api`;
+
+/** The session routes, which alone carry the refresh cookie (it is scoped to this path). */
+const AUTH_PATH_PREFIX = '/auth/';
+const REFRESH_PATH = '/auth/refresh';
+
+/** The code of a 401 for a missing or expired access token; other 401s (bad credentials) are final. */
+const EXPIRED_ACCESS_CODE = 'unauthorized';
 
 /** How long a request may take before it counts as failed. */
 export const REQUEST_TIMEOUT_MS = 15_000;
@@ -55,8 +71,76 @@ export function setAuthToken(token: string | null): void {
   authToken = token;
 }
 
-/** `path` is relative to the API root, e.g. `/health`. Resolves with the parsed JSON body. */
+/** Hears every session the client starts or renews, and `null` when it ends. */
+export type SessionListener = (session: SessionAnswer | null) => void;
+
+const sessionListeners = new Set<SessionListener>();
+
+/** Returns the function that stops listening. */
+export function subscribeToSession(listener: SessionListener): () => void {
+  sessionListeners.add(listener);
+  return () => {
+    sessionListeners.delete(listener);
+  };
+}
+
+/** Keeps the answer's access token for later requests and tells the listeners. */
+export function beginSession(session: SessionAnswer): void {
+  authToken = session.token;
+  sessionListeners.forEach((listener) => listener(session));
+}
+
+/** Forgets the access token and tells the listeners the session is over. */
+export function endSession(): void {
+  authToken = null;
+  sessionListeners.forEach((listener) => listener(null));
+}
+
+let renewal: Promise<SessionAnswer> | null = null;
+
+/**
+ * A new access token from the refresh cookie; concurrent callers share one request. A refusal
+ * (401) ends the session; no answer at all leaves it be, so a dropped connection in the garage
+ * does not sign the rider out.
+ */
+export function refreshSession(): Promise<SessionAnswer> {
+  renewal ??= send<SessionAnswer>(REFRESH_PATH, { method: 'POST' })
+    .then(
+      (session) => {
+        beginSession(session);
+        return session;
+      },
+      (error: unknown) => {
+        if (error instanceof ApiError && error.status === 401) endSession();
+        throw error;
+      },
+    )
+    .finally(() => {
+      renewal = null;
+    });
+  return renewal;
+}
+
+/**
+ * `path` is relative to the API root, e.g. `/health`. Resolves with the parsed JSON body. An
+ * expired access token is renewed once and the request repeated.
+ */
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const tokenSent = authToken;
+  try {
+    return await send<T>(path, options);
+  } catch (error) {
+    const expired =
+      error instanceof ApiError && error.status === 401 && error.code === EXPIRED_ACCESS_CODE;
+    if (!expired || path === REFRESH_PATH) throw error;
+    // A request that failed after another one already renewed the token only needs repeating.
+    if (authToken === tokenSent) await refreshSession();
+    return send<T>(path, options);
+  }
+}
+
+/** One request, as it is: no renewal. */
+async function send<T>(path: string, options: RequestOptions): Promise<T> {
   const { method = 'GET', body, signal } = options;
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
@@ -73,6 +157,9 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
     response = await fetch(`${API_BASE_URL}${path}`, {
       method,
       headers,
+      // The refresh cookie must travel to the session routes even when the API is on another
+      // origin (the dev server); nothing else needs cookies.
+      credentials: path.startsWith(AUTH_PATH_PREFIX) ? 'include' : 'same-origin',
       body: body === undefined ? undefined : JSON.stringify(body),
       signal: controller.signal,
     });

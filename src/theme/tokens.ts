@@ -144,6 +144,8 @@ export type Breakpoint = keyof typeof breakpoints;
 export const sizes = {
   /** A readable line length for the content column on wide windows. */
   contentMaxWidth: 720,
+  /** The content column of screens that lay out tables. */
+  wideContentMaxWidth: 1040,
   sideNavWidth: 248,
   topBarHeight: 56,
   /** Smallest comfortable touch target. */

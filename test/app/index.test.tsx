@@ -1,39 +1,42 @@
-import { render } from '@testing-library/react-native';
-import { SWRConfig } from 'swr';
+import { render, screen, within } from '@testing-library/react-native';
+
+import { fontFaces } from '@/theme';
 
 import HomeScreen from '../../app/index';
-import { getByTestId, queryAllByText, textOf } from '../src/helpers/web-queries';
+import { useFakeFetch } from '../src/helpers/fake-fetch';
+import { TestSWR } from '../src/helpers/swr';
+
+const { fetchMock, unanswered } = useFakeFetch();
 
 beforeEach(() => {
-  global.fetch = jest.fn(() => new Promise<Response>(() => {})) as unknown as typeof fetch;
+  fetchMock.mockImplementation(unanswered);
 });
 
 function renderHome() {
   return render(
-    <SWRConfig value={{ provider: () => new Map() }}>
+    <TestSWR>
       <HomeScreen />
-    </SWRConfig>,
+    </TestSWR>,
   );
 }
 
 describe('Home screen', () => {
   it('heads the page with the product name in the title face', () => {
     renderHome();
-    const title = getByTestId('home-title');
-    expect(textOf(title)).toBe('Sagwright');
-    expect(title.props.role).toBe('heading');
-    expect(title.props.style.fontFamily).toMatch(/^"Figtree SemiBold"/);
+    expect(screen.getByRole('header', { name: 'Sagwright' })).toHaveStyle({
+      fontFamily: fontFaces.sansSemiBold,
+    });
   });
 
   it('says in one sentence what the product does', () => {
     renderHome();
-    expect(queryAllByText(/^Sagwright measures .*sag.*spring rate.*preload.*\.$/)).toHaveLength(1);
+    expect(screen.getAllByText(/^Sagwright measures .*sag.*spring rate.*preload.*\.$/)).toHaveLength(1);
   });
 
   it('shows the safety notice and the server status', () => {
     renderHome();
-    expect(textOf(getByTestId('safety-notice'))).toContain('spring compressors');
-    expect(textOf(getByTestId('server-status'))).toContain('Checking the server');
-    expect(global.fetch).toHaveBeenCalledWith('/api/health', expect.anything());
+    expect(within(screen.getByTestId('safety-notice')).getByText(/spring compressors/)).toBeOnTheScreen();
+    expect(within(screen.getByTestId('server-status')).getByText(/Checking the server/)).toBeOnTheScreen();
+    expect(fetchMock).toHaveBeenCalledWith('/api/health', expect.anything());
   });
 });

@@ -1,27 +1,29 @@
-import { renderRouter } from 'expo-router/testing-library';
-import { SWRConfig } from 'swr';
+import { renderRouter, screen } from 'expo-router/testing-library';
 
 import NotFoundScreen from '../../app/+not-found';
 import RootLayout from '../../app/_layout';
 import HomeScreen from '../../app/index';
-import { closest, getAllByRole, getByText, textOf } from '../src/helpers/web-queries';
+import { useFakeFetch } from '../src/helpers/fake-fetch';
+import { TestSWR } from '../src/helpers/swr';
 
 let mockFontsLoaded = true;
 jest.mock('expo-font', () => ({
   useFonts: () => [mockFontsLoaded, null],
 }));
 
+const { fetchMock, unanswered } = useFakeFetch();
+
 beforeEach(() => {
-  global.fetch = jest.fn(() => new Promise<Response>(() => {})) as unknown as typeof fetch;
+  fetchMock.mockImplementation(unanswered);
 });
 
 function renderApp(initialUrl: string) {
   return renderRouter(
     {
       _layout: () => (
-        <SWRConfig value={{ provider: () => new Map() }}>
+        <TestSWR>
           <RootLayout />
-        </SWRConfig>
+        </TestSWR>
       ),
       index: HomeScreen,
       '+not-found': NotFoundScreen,
@@ -40,21 +42,20 @@ describe('Root layout', () => {
 
   it('frames the home screen with navigation', () => {
     renderApp('/');
-    const [nav] = getAllByRole('navigation');
-    expect(textOf(nav)).toBe('Home');
-    expect(getAllByRole('heading').map(textOf)).toContain('Sagwright');
+    expect(screen.getByTestId('app-navigation')).toHaveTextContent('Home');
+    expect(screen.getByRole('header', { name: 'Sagwright' })).toBeOnTheScreen();
   });
 
   it('shows nothing but the background until the fonts are ready', () => {
     mockFontsLoaded = false;
-    const { UNSAFE_root } = renderApp('/');
-    expect(getAllByRole('navigation')).toHaveLength(0);
-    expect(textOf(UNSAFE_root)).toBe('');
+    renderApp('/');
+    expect(screen.queryByTestId('app-navigation')).toBeNull();
+    expect(screen.root).toHaveTextContent('');
   });
 
   it('answers an unknown address with the not-found screen and a way home', () => {
     renderApp('/no/such/page');
-    expect(getAllByRole('heading').map(textOf)).toContain('Page not found');
-    expect(closest(getByText('Back to home'), 'a')?.props.href).toBe('/');
+    expect(screen.getByRole('header', { name: 'Page not found' })).toBeOnTheScreen();
+    expect(screen.getByRole('link', { name: 'Back to home' })).toHaveProp('href', '/');
   });
 });

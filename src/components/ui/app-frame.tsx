@@ -1,5 +1,5 @@
 import { Link, usePathname, type Href } from 'expo-router';
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Pressable, StyleSheet, View, type PressableProps } from 'react-native';
 
 import { useLayout, useTheme } from '@/theme';
@@ -12,9 +12,20 @@ export type NavItem = {
   label: string;
 };
 
+/** The signed-in person, as the frame shows them. */
+export type FrameAccount = {
+  name: string;
+  /** What kind of account it is, e.g. "Service desk". */
+  role: string;
+  /** Rejects, with a message to show, when the sign-out did not happen. */
+  onSignOut: () => Promise<void>;
+};
+
 export type AppFrameProps = {
   /** The destinations this person may reach; each role area adds its own. */
   items: readonly NavItem[];
+  /** Absent while nobody is signed in. */
+  account?: FrameAccount;
   children: ReactNode;
 };
 
@@ -24,14 +35,25 @@ export function isCurrent(href: string, pathname: string): boolean {
   return pathname === href || pathname.startsWith(`${href}/`);
 }
 
+/** The one item to mark: of those that are current, the deepest (Users over Shop on /admin/users). */
+export function currentHref(items: readonly NavItem[], pathname: string): string | undefined {
+  return items
+    .filter((item) => isCurrent(item.href, pathname))
+    .reduce<string | undefined>((best, item) => (!best || item.href.length > best.length ? item.href : best), undefined);
+}
+
 /**
- * The frame around every screen: a side column of navigation on wide windows,
- * a compact top bar on phones.
+ * The frame around every screen: a side column of navigation on wide windows, a compact top bar
+ * over a row of links on phones. The signed-in person's name and the sign-out sit in the side
+ * column's foot, or at the right of the top bar.
  */
-export function AppFrame({ items, children }: AppFrameProps) {
+export function AppFrame({ items, account, children }: AppFrameProps) {
   const { isWide } = useLayout();
   const { colors, sizes, spacing } = useTheme();
-  const pathname = usePathname();
+  const current = currentHref(items, usePathname());
+  const links = items.map((item) => (
+    <NavLink key={item.href} item={item} current={item.href === current} placement={isWide ? 'side' : 'top'} />
+  ));
 
   if (isWide) {
     return (
@@ -46,18 +68,12 @@ export function AppFrame({ items, children }: AppFrameProps) {
           }}
         >
           <Brand showTagline />
-          <View role="navigation" style={{ gap: spacing.xxs }}>
-            {items.map((item) => (
-              <NavLink
-                key={item.href}
-                item={item}
-                current={isCurrent(item.href, pathname)}
-                placement="side"
-              />
-            ))}
+          <View role="navigation" testID="app-navigation" style={[styles.fill, { gap: spacing.xxs }]}>
+            {links}
           </View>
+          {account && <AccountPanel account={account} placement="side" />}
         </View>
-        <View role="main" style={styles.fill}>
+        <View role="main" testID="app-main" style={styles.fill}>
           {children}
         </View>
       </View>
@@ -66,30 +82,20 @@ export function AppFrame({ items, children }: AppFrameProps) {
 
   return (
     <View style={[styles.fill, { backgroundColor: colors.background }]}>
-      <View
-        style={[
-          styles.topBar,
-          {
-            height: sizes.topBarHeight,
-            backgroundColor: colors.chrome,
-            paddingHorizontal: spacing.lg,
-            gap: spacing.lg,
-          },
-        ]}
-      >
-        <Brand />
-        <View role="navigation" style={[styles.topNav, { gap: spacing.xs }]}>
-          {items.map((item) => (
-            <NavLink
-              key={item.href}
-              item={item}
-              current={isCurrent(item.href, pathname)}
-              placement="top"
-            />
-          ))}
+      <View style={{ backgroundColor: colors.chrome, paddingHorizontal: spacing.lg }}>
+        <View style={[styles.topBar, { height: sizes.topBarHeight, gap: spacing.md }]}>
+          <Brand />
+          {account && <AccountPanel account={account} placement="top" />}
+        </View>
+        <View
+          role="navigation"
+          testID="app-navigation"
+          style={[styles.topNav, { columnGap: spacing.lg }]}
+        >
+          {links}
         </View>
       </View>
-      <View role="main" style={styles.fill}>
+      <View role="main" testID="app-main" style={styles.fill}>
         {children}
       </View>
     </View>
@@ -135,9 +141,92 @@ function BrandPressable({ showTagline, ...rest }: BrandPressableProps) {
   );
 }
 
-type NavPlacement = 'side' | 'top';
+type Placement = 'side' | 'top';
 
-type NavLinkProps = { item: NavItem; current: boolean; placement: NavPlacement };
+/** Who is signed in and the way out. A failed sign-out says so where the button is. */
+function AccountPanel({ account, placement }: { account: FrameAccount; placement: Placement }) {
+  const { spacing } = useTheme();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string>();
+
+  const signOut = async () => {
+    setBusy(true);
+    setError(undefined);
+    try {
+      await account.onSignOut();
+    } catch (cause) {
+      setError(cause instanceof Error ? cause.message : 'Could not sign out; try again.');
+      setBusy(false);
+    }
+  };
+
+  const button = (
+    <SignOutButton label={busy ? 'Signing out…' : 'Sign out'} disabled={busy} onPress={signOut} />
+  );
+  const failure = error && (
+    <ThemedText type="caption" color="chromeAccent" role="alert">
+      {error}
+    </ThemedText>
+  );
+
+  if (placement === 'side') {
+    return (
+      <View testID="app-account" style={{ gap: spacing.sm, paddingHorizontal: spacing.sm }}>
+        <View>
+          <ThemedText type="caption" color="onChromeMuted">
+            Signed in as
+          </ThemedText>
+          <ThemedText type="label" color="onChrome" numberOfLines={2}>
+            {account.name}
+          </ThemedText>
+          <ThemedText type="caption" color="onChromeMuted">
+            {account.role}
+          </ThemedText>
+        </View>
+        {button}
+        {failure}
+      </View>
+    );
+  }
+  return (
+    <View testID="app-account" style={[styles.topAccount, { gap: spacing.sm }]}>
+      <View style={styles.topAccountText}>
+        <ThemedText type="caption" color="onChrome" numberOfLines={1}>
+          {account.name}
+        </ThemedText>
+        {failure}
+      </View>
+      {button}
+    </View>
+  );
+}
+
+function SignOutButton({ label, ...rest }: PressableProps & { label: string }) {
+  const { colors, radii, sizes, spacing } = useTheme();
+  return (
+    <Pressable
+      accessibilityRole="button"
+      {...rest}
+      style={({ pressed }) => [
+        styles.signOut,
+        {
+          minHeight: sizes.touchTarget,
+          paddingHorizontal: spacing.md,
+          borderRadius: radii.sm,
+          borderColor: colors.onChromeMuted,
+          backgroundColor: pressed ? colors.chromeRaised : 'transparent',
+          opacity: rest.disabled ? 0.6 : 1,
+        },
+      ]}
+    >
+      <ThemedText type="label" color="onChrome" selectable={false}>
+        {label}
+      </ThemedText>
+    </Pressable>
+  );
+}
+
+type NavLinkProps = { item: NavItem; current: boolean; placement: Placement };
 
 function NavLink({ item, current, placement }: NavLinkProps) {
   return (
@@ -156,7 +245,7 @@ const CURRENT_PAGE = { 'aria-current': 'page' } as PressableProps;
 type NavPressableProps = PressableProps & {
   label: string;
   current: boolean;
-  placement: NavPlacement;
+  placement: Placement;
 };
 
 function NavPressable({ label, current, placement, ...rest }: NavPressableProps) {
@@ -181,7 +270,6 @@ function NavPressable({ label, current, placement, ...rest }: NavPressableProps)
               styles.topLink,
               {
                 minHeight: sizes.touchTarget,
-                paddingHorizontal: spacing.sm,
                 borderBottomColor: current ? colors.chromeAccent : 'transparent',
               },
             ]
@@ -198,8 +286,12 @@ const styles = StyleSheet.create({
   fill: { flex: 1 },
   row: { flex: 1, flexDirection: 'row' },
   topBar: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between' },
-  topNav: { flexDirection: 'row', alignItems: 'center' },
+  // Wraps rather than scrolls, so no destination hides beyond the edge of a phone.
+  topNav: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center' },
+  topAccount: { flexDirection: 'row', alignItems: 'center', flexShrink: 1 },
+  topAccountText: { flexShrink: 1, alignItems: 'flex-end' },
   brand: { flexDirection: 'row', alignItems: 'center' },
   sideLink: { justifyContent: 'center', borderLeftWidth: 3 },
   topLink: { justifyContent: 'center', borderBottomWidth: 3 },
+  signOut: { alignItems: 'center', justifyContent: 'center', alignSelf: 'flex-start', borderWidth: 1 },
 });

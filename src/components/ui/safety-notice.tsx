@@ -30,11 +30,9 @@ export function SafetyNotice({ title = 'Work safely' }: SafetyNoticeProps) {
       </View>
       <View role="list" style={{ gap: spacing.sm }}>
         {SAFETY_CAUTIONS.map((caution) => (
-          <View
-            key={caution}
-            role="listitem"
-            style={[styles.item, { gap: spacing.sm }]}
-          >
+          // `accessible` makes each caution one element for a native screen reader; the web
+          // ignores it and reads the list item.
+          <View key={caution} role="listitem" accessible style={[styles.item, { gap: spacing.sm }]}>
             <View style={[styles.bullet, { backgroundColor: colors.warning }]} />
             <ThemedText style={styles.itemText}>{caution}</ThemedText>
           </View>

@@ -91,7 +91,7 @@ describe('deactivation', () => {
 });
 
 describe('the refresh cookie', () => {
-  test('is httpOnly, SameSite=Strict, scoped to /api/auth, and not Secure outside production', async () => {
+  test('is httpOnly, SameSite=Strict, scoped to /api/auth, and not Secure on plain HTTP', async () => {
     const rider = await createAccount(t, 'rider');
     const res = await signIn(t, rider.email).expect(200);
     const cookie = refreshSetCookie(res);
@@ -102,8 +102,8 @@ describe('the refresh cookie', () => {
     expect(res.body).toEqual({ token: expect.any(String), expiresIn: TOKEN_SECONDS.access, user: expect.objectContaining({ id: rider.id }) });
   });
 
-  test('is Secure in production', async () => {
-    const prod = await makeTestContext({ production: true });
+  test('is Secure when the shop is reached over https', async () => {
+    const prod = await makeTestContext({ production: true, secureCookies: true });
     try {
       const rider = await createAccount(prod, 'rider');
       const res = await signIn(prod, rider.email).expect(200);

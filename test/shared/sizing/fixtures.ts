@@ -1,6 +1,6 @@
 /** Requests, contexts and generators shared by the sizing tests. */
 
-import fc from 'fast-check';
+import * as fc from 'fast-check';
 import { buildWarningThresholds } from '@shared/sizing';
 import type {
   CatalogueSpring,
@@ -75,7 +75,7 @@ export function roadRequest(overrides: Partial<SizingRequest> = {}): SizingReque
 }
 
 /** Every number anywhere in a value, with its path. */
-export function collectNumbers(value: unknown, path = '', out: Array<[string, number]> = []): Array<[string, number]> {
+export function collectNumbers(value: unknown, path = '', out: [string, number][] = []): [string, number][] {
   if (typeof value === 'number') out.push([path, value]);
   else if (Array.isArray(value)) value.forEach((v, i) => collectNumbers(v, `${path}[${i}]`, out));
   else if (value !== null && typeof value === 'object') {
@@ -246,4 +246,109 @@ export function arbitraryCatalogue(): fc.Arbitrary<SizingContext['springs']> {
       { maxLength: 8 },
     ),
   });
+}
+
+/** A number at either end of a range or anywhere inside it. */
+function edge(min: number, max: number): fc.Arbitrary<number> {
+  return fc.oneof(fc.constant(min), fc.constant(max), fc.double({ min, max, noNaN: true }));
+}
+
+function arbitraryEdgeReadings(travelMm: number) {
+  return fc
+    .record({ extendedMm: edge(travelMm + 1, 2000), staticShare: edge(0, 1), riderShare: edge(0, 1), spread: edge(0, 1), paired: fc.boolean() })
+    .map((r) => {
+      const staticSag = r.staticShare * travelMm;
+      const riderSag = staticSag + r.riderShare * (travelMm - staticSag);
+      const spread = r.spread * Math.min(r.extendedMm - riderSag - 0.5, 40);
+      return {
+        extendedMm: r.extendedMm,
+        staticMm: reading(r.extendedMm, staticSag, spread, r.paired),
+        riderMm: reading(r.extendedMm, riderSag, spread, !r.paired),
+      };
+    });
+}
+
+function arbitraryEdgeAdjuster() {
+  return fc
+    .record({
+      kind: fc.constantFrom('threaded' as const, 'stepped' as const, 'spacer' as const),
+      mmPerUnit: edge(0.001, 50),
+      minPosition: edge(-1000, 999),
+      span: edge(0.001, 1),
+      at: edge(0, 1),
+    })
+    .map((a) => {
+      const maxPosition = a.minPosition + a.span * (1000 - a.minPosition);
+      return { kind: a.kind, mmPerUnit: a.mmPerUnit, minPosition: a.minPosition, maxPosition, position: a.minPosition + a.at * (maxPosition - a.minPosition) };
+    });
+}
+
+/** Requests at the edges of every range the schema accepts. */
+export function arbitraryEdgeRequest(): fc.Arbitrary<SizingRequest> {
+  const front = edge(30, 350).chain((travelMm) =>
+    fc.record(
+      {
+        travelMm: fc.constant(travelMm),
+        springCount: fc.constantFrom(1 as const, 2 as const),
+        rakeDeg: edge(0, 45),
+        rateNmm: edge(0.001, 50),
+        preloadMm: edge(0, 100),
+        family: fc.constant('F'),
+        adjuster: arbitraryEdgeAdjuster(),
+        readings: arbitraryEdgeReadings(travelMm),
+        target: fc.record({ rider: edge(0.001, 1), stat: edge(0, 0.999) }).map((t) => ({ riderSagMm: t.rider * travelMm, staticSagMm: t.stat * t.rider * travelMm })),
+      },
+      { requiredKeys: ['travelMm', 'springCount', 'rakeDeg', 'rateNmm', 'preloadMm', 'family', 'adjuster'] },
+    ),
+  );
+  const rear = fc.record({ travel: edge(30, 400), ratio: edge(0.5, 6) }).chain(({ travel, ratio }) => {
+    const stroke = Math.min(200, Math.max(10, travel / ratio));
+    return fc.record(
+      {
+        wheelTravelMm: fc.constant(travel),
+        shockStrokeMm: fc.constant(stroke),
+        gasForceN: edge(0, 2000),
+        linkage: arbitraryLinkage(travel, stroke),
+        rateNmm: edge(0.001, 500),
+        preloadMm: edge(0, 100),
+        family: fc.constant('S'),
+        adjuster: arbitraryEdgeAdjuster(),
+        readings: arbitraryEdgeReadings(travel),
+      },
+      { requiredKeys: ['wheelTravelMm', 'shockStrokeMm', 'rateNmm', 'preloadMm', 'family', 'adjuster'] },
+    );
+  });
+  return fc
+    .record({
+      massKg: edge(30, 700),
+      frontShare: edge(0, 1),
+      unsprungFront: edge(0, 0.999),
+      unsprungRear: edge(0, 0.999),
+      bodyKg: edge(20, 300),
+      gearKg: edge(0, 80),
+      luggageKg: edge(0, 300),
+      rearShare: edge(0, 1),
+      luggageRearShare: fc.option(edge(0, 1.5), { nil: undefined }),
+      front: fc.option(front, { nil: undefined }),
+      rear: fc.option(rear, { nil: undefined }),
+      dampingRatio: fc.option(edge(0.001, 3), { nil: undefined }),
+    })
+    .filter((r) => r.front !== undefined || r.rear !== undefined)
+    .map((r) => {
+      const request: SizingRequest = {
+        discipline: 'road',
+        bike: {
+          massKg: r.massKg,
+          frontShare: r.frontShare,
+          unsprungFrontKg: Math.min(150, r.unsprungFront * r.massKg * r.frontShare),
+          unsprungRearKg: Math.min(150, r.unsprungRear * r.massKg * (1 - r.frontShare)),
+        },
+        rider: { bodyKg: r.bodyKg, gearKg: r.gearKg, luggageKg: r.luggageKg, rearShare: r.rearShare },
+      };
+      if (r.luggageRearShare !== undefined) request.rider.luggageRearShare = r.luggageRearShare;
+      if (r.front) request.front = r.front;
+      if (r.rear) request.rear = r.rear;
+      if (r.dampingRatio !== undefined) request.dampingRatio = r.dampingRatio;
+      return request;
+    });
 }

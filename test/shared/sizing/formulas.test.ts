@@ -9,7 +9,6 @@ import type { SagWindows } from '@shared/sizing/targets';
 import { forkSpring, roadFront, roadRear, shockSpring, thresholds } from './fixtures';
 
 const g = 9.80665; // standard gravity, exact (CGPM 1901; NIST SP 811)
-const cos25 = Math.cos((25 * Math.PI) / 180); // 0.90630779
 
 describe('loads (section 2)', () => {
   it('standard gravity is 9.80665 m/s^2 (CGPM 1901, NIST SP 811)', () => {

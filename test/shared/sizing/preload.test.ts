@@ -17,7 +17,7 @@ function endOf(request: SizingRequest, end: 'front' | 'rear'): EndResult {
 }
 
 /** Sag change per mm of preload: 1 on the fork's axis, LR at the wheel for a constant-ratio shock. */
-const cases: Array<[string, SizingRequest, 'front' | 'rear', number]> = [
+const cases: [string, SizingRequest, 'front' | 'rear', number][] = [
   ['threaded fork cap', roadRequest({ front: roadFront({ adjuster: { kind: 'threaded', mmPerUnit: 1, position: 5, maxPosition: 25 } }) }), 'front', 1],
   ['stepped fork', roadRequest({ front: roadFront({ preloadMm: 4, adjuster: { kind: 'stepped', mmPerUnit: 2.5, position: 2, maxPosition: 12 } }) }), 'front', 1],
   ['fork spacer', roadRequest({ front: roadFront({ preloadMm: 12, adjuster: { kind: 'spacer', mmPerUnit: 1, position: 15, maxPosition: 40 } }) }), 'front', 1],

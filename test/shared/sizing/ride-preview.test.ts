@@ -14,6 +14,7 @@ interface OdexSolver {
   solve(f: (t: number, y: number[]) => number[], t0: number, y0: number[], tEnd: number, out: unknown): unknown;
   grid(dt: number, out: (t: number, y: number[]) => void): unknown;
 }
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- odex has no declarations to import with
 const { Solver } = require('odex') as { Solver: new (n: number) => OdexSolver };
 
 /**

@@ -3,6 +3,7 @@ import { computeOvershoot } from '@shared/sizing';
 
 // js-quantities ships no types; only what these tests use.
 type Quantity = { to(unit: string): { scalar: number } };
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- js-quantities has no declarations to import with
 const Qty: (text: string) => Quantity = require('js-quantities');
 
 const relative = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
@@ -48,7 +49,7 @@ describe('conversions against NIST SP 811 (2008)', () => {
 });
 
 describe('conversions against js-quantities (a second units library, 7 significant digits)', () => {
-  const pairs: Array<[string, number, DisplayUnit, DisplayUnit, string, string]> = [
+  const pairs: [string, number, DisplayUnit, DisplayUnit, string, string][] = [
     ['in to mm', 1, 'in', 'mm', '1 in', 'mm'],
     ['lbf to N', 1, 'lbf', 'N', '1 lbf', 'N'],
     ['lb to kg', 1, 'lb', 'kg', '1 lb', 'kg'],

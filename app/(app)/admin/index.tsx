@@ -1,0 +1,32 @@
+import { Card } from '@/components/ui/card';
+import { Screen } from '@/components/ui/screen';
+import { TextLink } from '@/components/ui/text-link';
+import { ThemedText } from '@/components/ui/themed-text';
+
+export default function ShopScreen() {
+  return (
+    <Screen>
+      <ThemedText type="title">Shop</ThemedText>
+      <ThemedText>
+        Run the shop from here: who may sign in and with which role, and later the shop&apos;s
+        settings and the target profiles every sizing starts from.
+      </ThemedText>
+      <Card>
+        <ThemedText type="heading">Users</ThemedText>
+        <ThemedText color="textMuted">
+          Find an account, change its role, switch it off or on, or create one for a member of
+          staff.
+        </ThemedText>
+        <TextLink href="/admin/users">Manage users</TextLink>
+      </Card>
+      <Card>
+        <ThemedText type="heading">Outbox</ThemedText>
+        <ThemedText color="textMuted">
+          On a development server, the mails the app would have sent (password resets) wait here
+          instead.
+        </ThemedText>
+        <TextLink href="/admin/outbox">Open the outbox</TextLink>
+      </Card>
+    </Screen>
+  );
+}

@@ -1,0 +1,19 @@
+import { Card } from '@/components/ui/card';
+import { Screen } from '@/components/ui/screen';
+import { ThemedText } from '@/components/ui/themed-text';
+
+export default function QuotesScreen() {
+  return (
+    <Screen>
+      <ThemedText type="title">Quotes</ThemedText>
+      <ThemedText>
+        The service desk will find its customers here and turn a rider&apos;s result into a priced
+        spring-swap quote the rider can accept.
+      </ThemedText>
+      <Card>
+        <ThemedText type="bodyStrong">No quotes yet</ThemedText>
+        <ThemedText color="textMuted">Customers and quotes come next.</ThemedText>
+      </Card>
+    </Screen>
+  );
+}

@@ -1,0 +1,58 @@
+/**
+ * The ride with the current spring against the recommended one: ride frequency (5g), the damping
+ * ratio the same damper then gives (5h) and the preview's step figures (5i). Both springs are
+ * rated where they would ride: each at its aimed rider sag.
+ */
+
+import type { CandidateResult, EndResult, LoadsN } from '../types/sizing';
+import type { EndModel } from './end-model';
+import { computeSprungMassKg } from './loads';
+import {
+  chooseReboundHint,
+  computeDampingRatioScale,
+  computeRideFrequencyHz,
+  RIDE_FREQUENCY_NOTE,
+} from './ride-frequency';
+import { choosePreviewDuration, describePreviewCurve, PREVIEW_NOTE } from './ride-preview';
+import { makeSpringLaw, type SpringLaw } from './spring-law';
+
+export interface RideSetting {
+  spring: SpringLaw;
+  preloadMm: number;
+  riderSagMm: number;
+}
+
+export function assessRide(
+  model: EndModel,
+  loads: LoadsN,
+  current: RideSetting,
+  pick: CandidateResult | null,
+  riderTargetMm: number,
+  dampingRatio: number,
+  sameRatePct: number,
+): Pick<EndResult, 'rideFrequencyHz' | 'dampingRatioScale' | 'reboundHint' | 'preview'> {
+  const massKg = computeSprungMassKg(loads);
+  const oldRate = model.wheelRateAt(current.spring, current.preloadMm, current.riderSagMm);
+  const newRate =
+    pick && pick.preloadMm !== null
+      ? model.wheelRateAt(makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm), pick.preloadMm, riderTargetMm)
+      : null;
+  const currentHz = computeRideFrequencyHz(oldRate, massKg);
+  const recommendedHz = newRate === null ? null : computeRideFrequencyHz(newRate, massKg);
+  const scale = newRate === null ? null : computeDampingRatioScale(oldRate, newRate);
+  const oldWn = currentHz === null ? null : 2 * Math.PI * currentHz;
+  const newWn = recommendedHz === null || scale === null ? null : 2 * Math.PI * recommendedHz;
+  const spans = [oldWn, newWn].filter((w): w is number => w !== null);
+  return {
+    rideFrequencyHz: { current: currentHz, recommended: recommendedHz, note: RIDE_FREQUENCY_NOTE },
+    dampingRatioScale: scale,
+    reboundHint: scale === null || newRate === null ? null : chooseReboundHint(oldRate, newRate, sameRatePct),
+    preview: {
+      assumedDampingRatio: dampingRatio,
+      old: oldWn === null ? null : describePreviewCurve(oldWn, dampingRatio),
+      new: newWn === null || scale === null ? null : describePreviewCurve(newWn, dampingRatio * scale),
+      durationS: spans.length > 0 ? choosePreviewDuration(...spans) : null,
+      note: PREVIEW_NOTE,
+    },
+  };
+}

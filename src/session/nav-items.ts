@@ -1,0 +1,28 @@
+/** What the app frame's navigation offers: the areas the signed-in role may enter, own area first. */
+import type { NavItem } from '@/components/ui/app-frame';
+import type { Role } from '@shared/types/roles';
+
+import { AREAS, mayEnter, type Area } from './access';
+
+const AREA_ITEMS: Record<Area, readonly NavItem[]> = {
+  rider: [{ href: '/rider', label: 'Garage' }],
+  desk: [{ href: '/desk', label: 'Quotes' }],
+  counter: [{ href: '/counter', label: 'Spring catalogue' }],
+  admin: [
+    { href: '/admin', label: 'Shop' },
+    { href: '/admin/users', label: 'Users' },
+    { href: '/admin/outbox', label: 'Outbox' },
+  ],
+};
+
+export const SIGNED_OUT_ITEMS: readonly NavItem[] = [
+  { href: '/', label: 'Home' },
+  { href: '/sign-in', label: 'Sign in' },
+];
+
+/** `null` while nobody is signed in. */
+export function navItemsFor(role: Role | null): readonly NavItem[] {
+  if (!role) return SIGNED_OUT_ITEMS;
+  const areas = [role, ...AREAS.filter((area) => area !== role && mayEnter(role, area))];
+  return areas.flatMap((area) => AREA_ITEMS[area]);
+}

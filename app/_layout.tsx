@@ -3,6 +3,7 @@ import { Slot } from 'expo-router';
 import { View } from 'react-native';
 
 import { AppFrame } from '@/components/ui/app-frame';
+import { LoadingState } from '@/components/ui/loading-state';
 import { ROLE_LABELS } from '@/session/access';
 import { navItemsFor } from '@/session/nav-items';
 import { SessionProvider, useSession } from '@/session/session-provider';
@@ -30,13 +31,23 @@ export default function RootLayout() {
   );
 }
 
-/** The frame offers what the session allows; while it is being restored, no destinations yet. */
+/**
+ * The frame offers what the session allows. No screen shows until the session is known: the
+ * guards then decide once, and a deep link survives to the screen it names (the navigator would
+ * otherwise drop the part of the address it could not show yet).
+ */
 function FramedApp() {
   const { status, user, signOut } = useSession();
-  const items = status === 'loading' ? [] : navItemsFor(user?.role ?? null);
+  if (status === 'loading') {
+    return (
+      <AppFrame items={[]}>
+        <LoadingState label="Restoring your session…" />
+      </AppFrame>
+    );
+  }
   const account = user ? { name: user.name, role: ROLE_LABELS[user.role], onSignOut: signOut } : undefined;
   return (
-    <AppFrame items={items} account={account}>
+    <AppFrame items={navItemsFor(user?.role ?? null)} account={account}>
       <Slot />
     </AppFrame>
   );

@@ -27,11 +27,10 @@ export default function HomeScreen() {
   );
 }
 
-/** Into the app: the way to one's own area, or to sign in or up. Nothing until the session is known. */
+/** Into the app: the way to one's own area, or to sign in or up. */
 function CallToAction() {
-  const { status, user } = useSession();
+  const { user } = useSession();
   const { spacing } = useTheme();
-  if (status === 'loading') return null;
   return (
     <View style={[styles.row, { gap: spacing.md }]}>
       {user ? (

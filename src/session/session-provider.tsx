@@ -1,8 +1,9 @@
 /**
  * Who is signed in, for the whole app. On start the provider asks the server to restore a session
- * from the refresh cookie, so a reload or a reopened tab keeps the person signed in. The API
- * client reports every later change (a renewal, the end of a session), so the state here never
- * disagrees with the token it holds.
+ * from the refresh cookie, so a reload or a reopened tab keeps the person signed in (on the web
+ * only when this browser has signed in before: see session-hint.web.ts). The API client reports
+ * every later change (a renewal, the end of a session), so the state here never disagrees with
+ * the token it holds.
  */
 import { createContext, use, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { useSWRConfig } from 'swr';
@@ -18,7 +19,7 @@ import {
 import type { SignInInput, SignUpInput } from '@shared/schemas/auth.schema';
 import type { AccountUser, SessionAnswer } from '@shared/types/account';
 
-export type SessionStatus = 'loading' | 'signed-in' | 'signed-out';
+import { mayHaveSession, rememberSession } from './session-hint';
 
 type SessionState =
   | { status: 'loading'; user: null }
@@ -38,16 +39,18 @@ export type Session = SessionState & {
   signOut: () => Promise<void>;
 };
 
+const RESTORING: SessionState = { status: 'loading', user: null };
 const SIGNED_OUT: SessionState = { status: 'signed-out', user: null };
 
 const SessionContext = createContext<Session | null>(null);
 
 export function SessionProvider({ children }: { children: ReactNode }) {
-  const [state, setState] = useState<SessionState>({ status: 'loading', user: null });
+  const [state, setState] = useState<SessionState>(() => (mayHaveSession() ? RESTORING : SIGNED_OUT));
   const { mutate } = useSWRConfig();
 
   useEffect(() => {
     const unsubscribe = subscribeToSession((session) => {
+      rememberSession(session !== null);
       if (session) {
         setState({ status: 'signed-in', user: session.user });
       } else {
@@ -56,8 +59,12 @@ export function SessionProvider({ children }: { children: ReactNode }) {
         void mutate(() => true, undefined, { revalidate: false });
       }
     });
-    // A refusal already ended the session through the listener; no answer counts as signed out.
-    refreshSession().catch(() => setState((current) => (current.status === 'loading' ? SIGNED_OUT : current)));
+    if (mayHaveSession()) {
+      // A refusal has already ended the session through the listener; no answer counts as none.
+      refreshSession().catch(() =>
+        setState((current) => (current.status === 'loading' ? SIGNED_OUT : current)),
+      );
+    }
     return unsubscribe;
   }, [mutate]);
 

@@ -1,40 +1,42 @@
-import { render, screen, within } from '@testing-library/react-native';
+import { screen, within } from 'expo-router/testing-library';
 
 import { fontFaces } from '@/theme';
 
-import HomeScreen from '../../app/index';
-import { useFakeFetch } from '../src/helpers/fake-fetch';
-import { TestSWR } from '../src/helpers/swr';
+import { answerBy, installFakeFetch, respondError } from '../src/helpers/fake-fetch';
+import { renderApp } from './render-app';
 
-const { fetchMock, unanswered } = useFakeFetch();
+const { fetchMock, unanswered } = installFakeFetch();
 
 beforeEach(() => {
-  fetchMock.mockImplementation(unanswered);
+  fetchMock.mockImplementation((url, init) =>
+    url === '/api/health'
+      ? unanswered()
+      : answerBy({ 'POST /api/auth/refresh': respondError(401, 'session-expired', 'No session.') })(url, init),
+  );
 });
 
-function renderHome() {
-  return render(
-    <TestSWR>
-      <HomeScreen />
-    </TestSWR>,
-  );
+async function renderHome() {
+  renderApp('/');
+  return screen.findByTestId('home-title');
 }
 
 describe('Home screen', () => {
-  it('heads the page with the product name in the title face', () => {
-    renderHome();
-    expect(screen.getByRole('header', { name: 'Sagwright' })).toHaveStyle({
-      fontFamily: fontFaces.sansSemiBold,
-    });
+  afterEach(() => jest.useRealTimers());
+
+  it('heads the page with the product name in the title face', async () => {
+    const title = await renderHome();
+    expect(title).toHaveTextContent('Sagwright');
+    expect(title).toHaveStyle({ fontFamily: fontFaces.sansSemiBold });
+    expect(screen.getByRole('header', { name: 'Sagwright' })).toBe(title);
   });
 
-  it('says in one sentence what the product does', () => {
-    renderHome();
+  it('says in one sentence what the product does', async () => {
+    await renderHome();
     expect(screen.getAllByText(/^Sagwright measures .*sag.*spring rate.*preload.*\.$/)).toHaveLength(1);
   });
 
-  it('shows the safety notice and the server status', () => {
-    renderHome();
+  it('shows the safety notice and the server status', async () => {
+    await renderHome();
     expect(within(screen.getByTestId('safety-notice')).getByText(/spring compressors/)).toBeOnTheScreen();
     expect(within(screen.getByTestId('server-status')).getByText(/Checking the server/)).toBeOnTheScreen();
     expect(fetchMock).toHaveBeenCalledWith('/api/health', expect.anything());

@@ -8,8 +8,8 @@ export default function ShopScreen() {
     <Screen>
       <ThemedText type="title">Shop</ThemedText>
       <ThemedText>
-        Run the shop from here: who may sign in and with which role, and later the shop&apos;s
-        settings and the target profiles every sizing starts from.
+        Run the shop from here: who may sign in, and with which role. The shop&apos;s settings and
+        the target profiles every sizing starts from will join them.
       </ThemedText>
       <Card>
         <ThemedText type="heading">Users</ThemedText>
@@ -22,8 +22,8 @@ export default function ShopScreen() {
       <Card>
         <ThemedText type="heading">Outbox</ThemedText>
         <ThemedText color="textMuted">
-          On a development server, the mails the app would have sent (password resets) wait here
-          instead.
+          On a development server, the mails the app would have sent, such as password resets,
+          wait here instead.
         </ThemedText>
         <TextLink href="/admin/outbox">Open the outbox</TextLink>
       </Card>

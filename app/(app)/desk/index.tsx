@@ -1,4 +1,3 @@
-import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { ThemedText } from '@/components/ui/themed-text';
 
@@ -10,10 +9,6 @@ export default function QuotesScreen() {
         The service desk will find its customers here and turn a rider&apos;s result into a priced
         spring-swap quote the rider can accept.
       </ThemedText>
-      <Card>
-        <ThemedText type="bodyStrong">No quotes yet</ThemedText>
-        <ThemedText color="textMuted">Customers and quotes come next.</ThemedText>
-      </Card>
     </Screen>
   );
 }

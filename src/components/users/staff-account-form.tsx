@@ -1,9 +1,13 @@
+import { StyleSheet, View } from 'react-native';
+
 import { ChoiceField } from '@/components/form/choice-field';
 import { Form } from '@/components/form/form';
 import { FormErrorBanner } from '@/components/form/form-error-banner';
 import { SubmitButton } from '@/components/form/submit-button';
 import { TextField } from '@/components/form/text-field';
+import { Button } from '@/components/ui/button';
 import { useUserChanges } from '@/hooks/use-users';
+import { useTheme } from '@/theme';
 import { PASSWORD_MIN, staffCreateSchema } from '@shared/schemas/auth.schema';
 import type { AccountUser } from '@shared/types/account';
 
@@ -12,8 +16,14 @@ import { ROLE_CHOICES } from './account-controls';
 const EMPTY = { name: '', email: '', role: 'desk', password: '' };
 
 /** An account made by the admin, with any role; the person changes the password later by reset. */
-export function StaffAccountForm({ onCreated }: { onCreated: (user: AccountUser) => void }) {
+export type StaffAccountFormProps = {
+  onCreated: (user: AccountUser) => void;
+  onCancel: () => void;
+};
+
+export function StaffAccountForm({ onCreated, onCancel }: StaffAccountFormProps) {
   const { createStaff } = useUserChanges();
+  const { spacing } = useTheme();
   return (
     <Form
       schema={staffCreateSchema}
@@ -41,7 +51,14 @@ export function StaffAccountForm({ onCreated }: { onCreated: (user: AccountUser)
         autoComplete="new-password"
       />
       <FormErrorBanner />
-      <SubmitButton label="Create the account" busyLabel="Creating…" />
+      <View style={[styles.actions, { gap: spacing.md }]}>
+        <SubmitButton label="Create the account" busyLabel="Creating…" />
+        <Button variant="secondary" label="Cancel" onPress={onCancel} />
+      </View>
     </Form>
   );
 }
+
+const styles = StyleSheet.create({
+  actions: { flexDirection: 'row', flexWrap: 'wrap' },
+});

@@ -21,7 +21,10 @@ export function UserTable({ users, selfId }: UserListProps) {
       aria-label="Accounts"
       style={[styles.table, { borderColor: colors.border, borderRadius: radii.md, backgroundColor: colors.surface }]}
     >
-      <View role="row" style={[styles.row, { padding: spacing.md, gap: spacing.lg, borderBottomColor: colors.border }]}>
+      <View
+        role="row"
+        style={[styles.row, styles.rowBlock, { padding: spacing.md, gap: spacing.lg, borderBottomColor: colors.border }]}
+      >
         <HeaderCell style={styles.account}>Account</HeaderCell>
         <HeaderCell style={styles.role}>Role</HeaderCell>
         <HeaderCell style={styles.status}>Sign-in</HeaderCell>

@@ -1,15 +1,20 @@
-import { api, ApiError, apiRequest, CLIENT_ERROR_CODES, setAuthToken } from '@/api/client';
+import {
+  api,
+  ApiError,
+  apiRequest,
+  CLIENT_ERROR_CODES,
+  refreshSession,
+  setAuthToken,
+  subscribeToSession,
+  type SessionListener,
+} from '@/api/client';
 
-/** A minimal fetch Response: only what the client reads. */
-function respond(status: number, body: string) {
-  return { ok: status >= 200 && status < 300, status, text: async () => body } as Response;
-}
+import { accountUser, sessionAnswer } from '../helpers/accounts';
+import { answerBy, installFakeFetch, respond, respondError, requestsOf } from '../helpers/fake-fetch';
 
-const fetchMock = jest.fn<Promise<Response>, [string, RequestInit]>();
+const { fetchMock } = installFakeFetch();
 
 beforeEach(() => {
-  fetchMock.mockReset();
-  global.fetch = fetchMock as unknown as typeof fetch;
   setAuthToken(null);
 });
 
@@ -131,5 +136,114 @@ describe('apiRequest', () => {
     const pending = apiRequest('/health', { signal: controller.signal });
     controller.abort();
     await expect(pending).rejects.toBe(abortError);
+  });
+});
+
+/** The Authorization header each request carried, in order. */
+function bearers(): (string | undefined)[] {
+  return fetchMock.mock.calls.map(([, init]) => (init.headers as Record<string, string>).Authorization);
+}
+
+const expired = () => respondError(401, 'unauthorized', 'Sign in to continue.');
+
+describe('the session', () => {
+  let heard: jest.MockedFunction<SessionListener>;
+  let unsubscribe: () => void;
+  beforeEach(() => {
+    heard = jest.fn();
+    unsubscribe = subscribeToSession(heard);
+  });
+  afterEach(() => unsubscribe());
+
+  it('sends cookies to the session routes only', async () => {
+    fetchMock.mockResolvedValue(respond(200, '{}'));
+    await api.post('/auth/sign-in', { email: 'rider@demo.test', password: 'x' });
+    await api.get('/me');
+    expect(fetchMock.mock.calls.map(([, init]) => init.credentials)).toEqual(['include', 'same-origin']);
+  });
+
+  it('renews an expired access token from the cookie and repeats the request once', async () => {
+    setAuthToken('stale');
+    const rider = accountUser('rider');
+    let meCalls = 0;
+    fetchMock.mockImplementation(
+      answerBy({
+        'GET /api/me': () => (++meCalls === 1 ? expired() : respond(200, { user: rider })),
+        'POST /api/auth/refresh': respond(200, sessionAnswer(rider, 'fresh')),
+      }),
+    );
+
+    await expect(api.get('/me')).resolves.toEqual({ user: rider });
+    expect(requestsOf(fetchMock)).toEqual(['GET /api/me', 'POST /api/auth/refresh', 'GET /api/me']);
+    expect(bearers()[2]).toBe('Bearer fresh');
+    expect(fetchMock.mock.calls[1][1].credentials).toBe('include');
+    expect(heard).toHaveBeenCalledWith(sessionAnswer(rider, 'fresh'));
+  });
+
+  it('renews once for requests that fail together, then repeats each of them', async () => {
+    setAuthToken('stale');
+    const rider = accountUser('rider');
+    fetchMock.mockImplementation(
+      answerBy({
+        'GET /api/me': (init) =>
+          (init.headers as Record<string, string>).Authorization === 'Bearer fresh'
+            ? respond(200, { user: rider })
+            : expired(),
+        'GET /api/health': (init) =>
+          (init.headers as Record<string, string>).Authorization === 'Bearer fresh'
+            ? respond(200, { ok: true })
+            : expired(),
+        'POST /api/auth/refresh': respond(200, sessionAnswer(rider, 'fresh')),
+      }),
+    );
+
+    const answers = await Promise.all([api.get('/me'), api.get('/health'), api.get('/me')]);
+    expect(answers).toEqual([{ user: rider }, { ok: true }, { user: rider }]);
+    const requests = requestsOf(fetchMock);
+    expect(requests.filter((r) => r === 'POST /api/auth/refresh')).toHaveLength(1);
+    expect(requests).toHaveLength(7);
+  });
+
+  it('ends the session when the renewal is refused, without repeating the request', async () => {
+    setAuthToken('stale');
+    fetchMock.mockImplementation(
+      answerBy({
+        'GET /api/me': expired(),
+        'POST /api/auth/refresh': respondError(401, 'session-expired', 'Your session has ended; sign in again.'),
+      }),
+    );
+
+    const error = await caught(api.get('/me'));
+    expect(error.code).toBe('session-expired');
+    expect(requestsOf(fetchMock)).toEqual(['GET /api/me', 'POST /api/auth/refresh']);
+    expect(heard).toHaveBeenCalledWith(null);
+
+    fetchMock.mockImplementation(answerBy({ 'GET /api/health': respond(200, '{}') }));
+    await api.get('/health');
+    expect(bearers().at(-1)).toBeUndefined();
+  });
+
+  it('keeps the session when the renewal gets no answer at all', async () => {
+    setAuthToken('stale');
+    fetchMock.mockImplementation(async (url) => {
+      if (url === '/api/auth/refresh') throw new TypeError('Failed to fetch');
+      return expired();
+    });
+    expect((await caught(api.get('/me'))).code).toBe(CLIENT_ERROR_CODES.network);
+    expect(heard).not.toHaveBeenCalled();
+  });
+
+  it('takes a wrong password as final: no renewal', async () => {
+    fetchMock.mockResolvedValue(respondError(401, 'bad-credentials', 'The e-mail or password is wrong.'));
+    expect((await caught(api.post('/auth/sign-in', {}))).code).toBe('bad-credentials');
+    expect(requestsOf(fetchMock)).toEqual(['POST /api/auth/sign-in']);
+  });
+
+  it('asks for a new renewal once the last one has settled', async () => {
+    const rider = accountUser('rider');
+    fetchMock.mockImplementation(answerBy({ 'POST /api/auth/refresh': respond(200, sessionAnswer(rider)) }));
+    await refreshSession();
+    await refreshSession();
+    expect(requestsOf(fetchMock)).toEqual(['POST /api/auth/refresh', 'POST /api/auth/refresh']);
   });
 });

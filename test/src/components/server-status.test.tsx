@@ -3,10 +3,10 @@ import { fireEvent, render, screen, waitFor } from '@testing-library/react-nativ
 import { ServerStatus } from '@/components/server-status';
 import { fontFaces } from '@/theme';
 
-import { respond, useFakeFetch } from '../helpers/fake-fetch';
+import { respond, installFakeFetch } from '../helpers/fake-fetch';
 import { TestSWR } from '../helpers/swr';
 
-const { fetchMock, unanswered } = useFakeFetch();
+const { fetchMock, unanswered } = installFakeFetch();
 
 function renderStatus() {
   return render(

@@ -10,8 +10,29 @@ export function respond(status: number, body?: unknown): Response {
   return { ok: status >= 200 && status < 300, status, text: async () => text } as Response;
 }
 
+/** The server's error envelope. */
+export function respondError(status: number, code: string, message: string, fields?: Record<string, string>) {
+  return respond(status, { error: { code, message, ...(fields && { fields }) } });
+}
+
+/** Answers, or makers of answers, by `METHOD /api/path?query`. */
+export type Answers = Record<string, Response | ((init: RequestInit) => Response | Promise<Response>)>;
+
+/**
+ * A fetch that answers each request from `answers`. A request with no answer gets a 501 whose
+ * message names it, so a test that forgot one fails on a readable message.
+ */
+export function answerBy(answers: Answers) {
+  return async (url: string, init: RequestInit): Promise<Response> => {
+    const request = `${init.method ?? 'GET'} ${url}`;
+    const answer = answers[request];
+    if (!answer) return respondError(501, 'no-answer-in-test', `No answer for ${request}`);
+    return typeof answer === 'function' ? answer(init) : answer;
+  };
+}
+
 /** Installs a fresh mock before each test of the calling file. */
-export function useFakeFetch(): { fetchMock: FetchMock; unanswered: () => Promise<Response> } {
+export function installFakeFetch(): { fetchMock: FetchMock; unanswered: () => Promise<Response> } {
   const fetchMock: FetchMock = jest.fn();
   const open: ((response: Response) => void)[] = [];
 
@@ -28,4 +49,9 @@ export function useFakeFetch(): { fetchMock: FetchMock; unanswered: () => Promis
     /** An answer that stays on its way for the rest of the test. */
     unanswered: () => new Promise<Response>((resolve) => open.push(resolve)),
   };
+}
+
+/** The requests made so far, as `METHOD /api/path`. */
+export function requestsOf(fetchMock: FetchMock): string[] {
+  return fetchMock.mock.calls.map(([url, init]) => `${init.method ?? 'GET'} ${url}`);
 }

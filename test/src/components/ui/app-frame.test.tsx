@@ -1,9 +1,9 @@
 import { Slot } from 'expo-router';
-import { renderRouter, screen } from 'expo-router/testing-library';
-import { within } from '@testing-library/react-native';
+import { fireEvent, renderRouter, screen, within } from 'expo-router/testing-library';
 import { Text } from 'react-native';
 
-import { AppFrame, isCurrent, type NavItem } from '@/components/ui/app-frame';
+import { AppFrame, currentHref, isCurrent, type FrameAccount, type NavItem } from '@/components/ui/app-frame';
+import { colors } from '@/theme';
 
 let mockIsWide = true;
 jest.mock('@/theme/use-layout', () => ({
@@ -11,32 +11,37 @@ jest.mock('@/theme/use-layout', () => ({
 }));
 
 const ITEMS: readonly NavItem[] = [
-  { href: '/', label: 'Home' },
-  { href: '/rider', label: 'Garage' },
+  { href: '/admin', label: 'Shop' },
+  { href: '/admin/users', label: 'Users' },
+  { href: '/desk', label: 'Quotes' },
 ];
 
-function renderFrame(initialUrl: string) {
+function renderFrame(initialUrl: string, account?: FrameAccount) {
   return renderRouter(
     {
       _layout: () => (
-        <AppFrame items={ITEMS}>
+        <AppFrame items={ITEMS} account={account}>
           <Slot />
         </AppFrame>
       ),
       index: () => <Text>Home page</Text>,
-      'rider/index': () => <Text>Garage page</Text>,
-      'rider/bikes': () => <Text>Bikes page</Text>,
+      'admin/index': () => <Text>Shop page</Text>,
+      'admin/users': () => <Text>Users page</Text>,
+      'desk/index': () => <Text>Quotes page</Text>,
     },
     { initialUrl },
   );
 }
 
-/** The links inside the navigation, as label and target. */
+/** The navigation's links as label and target, in order. */
 function navLinks() {
   return within(screen.getByTestId('app-navigation'))
     .getAllByRole('link')
-    .map((link) => [within(link).getByText(/./).props.children, link.props.href]);
+    .map((link) => [within(link).getByText(/.+/).props.children, link.props.href]);
 }
+
+/** The label of a navigation link; the current one is drawn in the full chrome colour. */
+const navLabel = (label: string) => within(screen.getByTestId('app-navigation')).getByText(label);
 
 describe('isCurrent', () => {
   it('matches home only on the root path', () => {
@@ -51,6 +56,15 @@ describe('isCurrent', () => {
   });
 });
 
+describe('currentHref', () => {
+  it('picks the deepest section that contains the path', () => {
+    expect(currentHref(ITEMS, '/admin/users')).toBe('/admin/users');
+    expect(currentHref(ITEMS, '/admin')).toBe('/admin');
+    expect(currentHref(ITEMS, '/admin/outbox')).toBe('/admin');
+    expect(currentHref(ITEMS, '/')).toBeUndefined();
+  });
+});
+
 describe('AppFrame', () => {
   afterEach(() => {
     // Here rather than at the top level so it runs before RNTL's cleanup: renderRouter
@@ -62,20 +76,22 @@ describe('AppFrame', () => {
   it.each([
     ['wide', true],
     ['phone', false],
-  ])('on a %s window links every item it is given, in order', (_, wide) => {
+  ])('on a %s window links every item it is given, in order, around the page', (_, wide) => {
     mockIsWide = wide;
-    renderFrame('/');
+    renderFrame('/admin');
     expect(navLinks()).toEqual([
-      ['Home', '/'],
-      ['Garage', '/rider'],
+      ['Shop', '/admin'],
+      ['Users', '/admin/users'],
+      ['Quotes', '/desk'],
     ]);
-    expect(screen.getByTestId('app-main')).toHaveTextContent('Home page');
+    expect(screen.getByTestId('app-main')).toHaveTextContent('Shop page');
   });
 
-  it('shows the page of a nested address inside the frame', () => {
-    renderFrame('/rider/bikes');
-    expect(screen.getByTestId('app-main')).toHaveTextContent('Bikes page');
-    expect(navLinks()).toHaveLength(2);
+  it('marks one section as current: the deepest that holds the page', () => {
+    renderFrame('/admin/users');
+    expect(navLabel('Users')).toHaveStyle({ color: colors.onChrome });
+    expect(navLabel('Shop')).toHaveStyle({ color: colors.onChromeMuted });
+    expect(navLabel('Quotes')).toHaveStyle({ color: colors.onChromeMuted });
   });
 
   it('shows the tagline in the side column only', () => {
@@ -86,5 +102,34 @@ describe('AppFrame', () => {
     renderFrame('/');
     expect(screen.queryByText('Suspension set-up')).toBeNull();
     expect(screen.getByText('Home page')).toBeOnTheScreen();
+  });
+
+  it.each([
+    ['wide', true],
+    ['phone', false],
+  ])('on a %s window names the signed-in person and signs them out', async (_, wide) => {
+    mockIsWide = wide;
+    const onSignOut = jest.fn(async () => {});
+    renderFrame('/admin', { name: 'Ada Brennick', role: 'Admin', onSignOut });
+    expect(within(screen.getByTestId('app-account')).getByText('Ada Brennick')).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole('button', { name: 'Sign out' }));
+    expect(onSignOut).toHaveBeenCalledTimes(1);
+    expect(await screen.findByRole('button', { name: 'Signing out…' })).toBeDisabled();
+  });
+
+  it('says so when the sign-out did not happen, and offers it again', async () => {
+    const onSignOut = jest.fn(async () => {
+      throw new Error('Could not reach the server. Check the connection and try again.');
+    });
+    renderFrame('/admin', { name: 'Ada Brennick', role: 'Admin', onSignOut });
+    fireEvent.press(screen.getByRole('button', { name: 'Sign out' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent(/Could not reach the server/);
+    expect(screen.getByRole('button', { name: 'Sign out' })).toBeEnabled();
+  });
+
+  it('has no account corner while nobody is signed in', () => {
+    renderFrame('/');
+    expect(screen.queryByTestId('app-account')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Sign out' })).toBeNull();
   });
 });

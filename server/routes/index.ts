@@ -1,12 +1,22 @@
 import { AppContext } from '../context';
 import { authRoutes } from './auth.router';
+import { bikeModelRoutes } from './bike-models.router';
+import { bikeRoutes } from './bikes.router';
+import { draftRoutes } from './drafts.router';
+import { profileRoutes } from './profile.router';
+import { setupLogRoutes } from './setup-log.router';
+import { shopDataRoutes } from './shop-data.router';
+import { sizingRecordRoutes } from './sizing-records.router';
+import { catalogueRoutes } from './catalogue.router';
 import { devRoutes } from './dev.router';
 import { healthRoutes } from './health.router';
+import { importRoutes } from './imports.router';
 import { RouteSpec } from './route-table';
 import { sizingRoutes } from './sizing.router';
+import { stockRoutes } from './stock.router';
 import { userRoutes } from './users.router';
 
 /** The whole API, in one table. */
 export function apiRoutes(ctx: AppContext): RouteSpec[] {
-  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx)];
+  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...shopDataRoutes(ctx)];
 }

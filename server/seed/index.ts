@@ -7,6 +7,7 @@ import { EntityManager } from 'typeorm';
 import { Database } from '../data-source';
 import { SeedRecord } from '../entities/seed-record.entity';
 import { seedDemoAccounts } from './demo-accounts';
+import { seedDemoBikeModels } from './demo-bike-models';
 import { seedDemoCatalogue } from './demo-catalogue';
 import { seedDemoWorkshop } from './demo-workshop';
 import { seedSizingDefaults } from './sizing-baseline';
@@ -22,6 +23,7 @@ const demoParts: SeedPart[] = [
   { name: 'demo-workshop', run: seedDemoWorkshop },
   { name: 'demo-catalogue', run: seedDemoCatalogue },
   { name: 'demo-accounts', run: seedDemoAccounts },
+  { name: 'demo-bike-models', run: seedDemoBikeModels },
 ];
 
 /** Returns the names of the parts loaded by this call. */

@@ -32,6 +32,8 @@ function toCatalogueSpring(row: SpringRate): CatalogueSpring {
     kind: row.kind,
     family: row.family,
     rateNmm: row.rateNmm,
+    secondRateNmm: row.secondRateNmm,
+    breakMm: row.breakMm,
     freeLengthMm: row.freeLengthMm,
     maxDeflectionMm: row.maxDeflectionMm,
     onHand: row.onHand,

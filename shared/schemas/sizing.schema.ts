@@ -4,11 +4,28 @@
  */
 
 import { array, lazy, mixed, number, object, string, ValidationError, type TestContext } from 'yup';
+import { SAME_LENGTH_MM } from '../sizing/readings';
 import type { SizingRequest } from '../types/sizing';
 import { toFieldErrors } from './field-errors';
 import { parseUserNumber } from '../units/parse-number';
 
 type Bounds = [number, number];
+
+/** Ranges of the fields that the cross-field checks compare, so a value refused on its own is not judged again. */
+const LENGTH_MM: Bounds = [0, 2000];
+const FRONT_TRAVEL_MM: Bounds = [30, 350];
+const REAR_TRAVEL_MM: Bounds = [30, 400];
+const STROKE_MM: Bounds = [10, 200];
+const TARGET_SAG_MM: Bounds = [0, 400];
+const POSITION: Bounds = [-1000, 1000];
+const BIKE_KG: Bounds = [30, 700];
+const UNSPRUNG_KG: Bounds = [0, 150];
+const SHARE: Bounds = [0, 1];
+
+/** A number inside its field's range: aboveMin for the fields that refuse the lower bound itself. */
+function within(value: unknown, [min, max]: Bounds, aboveMin = false): value is number {
+  return isNum(value) && (aboveMin ? value > min : value >= min) && value <= max;
+}
 
 /** Typed text goes through the decimal-comma parser; null counts as left out. */
 function readTyped(value: unknown, original: unknown): unknown {
@@ -33,16 +50,11 @@ function quantity(label: string, [min, max]: Bounds, unit: string, fix: string, 
   return options.optional ? bounded.optional() : bounded.required(`${label} is missing: ${fix}.`);
 }
 
-const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
-
-function meanOf(reading: unknown): number | undefined {
-  if (isNum(reading)) return reading;
-  if (reading && typeof reading === 'object') {
-    const { pushedMm, liftedMm } = reading as { pushedMm?: unknown; liftedMm?: unknown };
-    if (isNum(pushedMm) && isNum(liftedMm)) return (pushedMm + liftedMm) / 2;
-  }
-  return undefined;
+function isNum(v: unknown): v is number {
+  return typeof v === 'number' && Number.isFinite(v);
 }
+
+const isLength = (v: unknown): v is number => within(v, LENGTH_MM, true);
 
 const LENGTH_FIX = 'measure between the same two marks as the other readings, in mm';
 
@@ -50,27 +62,31 @@ function loadedReading(label: string) {
   return lazy((value: unknown) =>
     value !== null && typeof value === 'object'
       ? object({
-          pushedMm: quantity(`${label} after pushing down`, [0, 2000], ' mm', LENGTH_FIX, { aboveMin: true }),
-          liftedMm: quantity(`${label} after lifting`, [0, 2000], ' mm', LENGTH_FIX, { aboveMin: true }),
+          pushedMm: quantity(`${label} after pushing down`, LENGTH_MM, ' mm', LENGTH_FIX, { aboveMin: true }),
+          liftedMm: quantity(`${label} after lifting`, LENGTH_MM, ' mm', LENGTH_FIX, { aboveMin: true }),
         })
-      : quantity(label, [0, 2000], ' mm', LENGTH_FIX, { aboveMin: true }),
+      : quantity(label, LENGTH_MM, ' mm', LENGTH_FIX, { aboveMin: true }),
   );
 }
 
 const readingsSchema = object({
-  extendedMm: quantity('Extended length', [0, 2000], ' mm', 'measure it with the wheel off the ground, fully extended', {
+  extendedMm: quantity('Extended length', LENGTH_MM, ' mm', 'measure it with the wheel off the ground, fully extended', {
     aboveMin: true,
   }),
   staticMm: loadedReading('Static length'),
   riderMm: loadedReading('Rider length'),
-}).default(undefined);
+})
+  .default(undefined)
+  .nonNullable('The readings must be the extended, static and rider lengths, or left out to size from the weights.');
 
 const targetSchema = object({
-  riderSagMm: quantity('Target rider sag', [0, 400], ' mm', 'give the rider sag to aim at, or leave the target out', {
+  riderSagMm: quantity('Target rider sag', TARGET_SAG_MM, ' mm', 'give the rider sag to aim at, or leave the target out', {
     aboveMin: true,
   }),
-  staticSagMm: quantity('Target static sag', [0, 400], ' mm', 'give the static sag to aim at, or leave the target out'),
-}).default(undefined);
+  staticSagMm: quantity('Target static sag', TARGET_SAG_MM, ' mm', 'give the static sag to aim at, or leave the target out'),
+})
+  .default(undefined)
+  .nonNullable('The target must give a rider sag and a static sag, or be left out to use the profile.');
 
 const adjusterSchema = object({
   kind: string()
@@ -79,9 +95,9 @@ const adjusterSchema = object({
   mmPerUnit: quantity('Preload per adjuster unit', [0, 50], ' mm', 'give the thread pitch (mm per turn), the mm per step, or 1 for a spacer', {
     aboveMin: true,
   }),
-  position: quantity('Adjuster setting', [-1000, 1000], '', "count the current setting from the adjuster's zero"),
-  maxPosition: quantity('Adjuster maximum', [-1000, 1000], '', 'give the highest setting the adjuster reaches'),
-  minPosition: quantity('Adjuster minimum', [-1000, 1000], '', 'give the lowest setting, or leave it out for 0', {
+  position: quantity('Adjuster setting', POSITION, '', "count the current setting from the adjuster's zero"),
+  maxPosition: quantity('Adjuster maximum', POSITION, '', 'give the highest setting the adjuster reaches'),
+  minPosition: quantity('Adjuster minimum', POSITION, '', 'give the lowest setting, or leave it out for 0', {
     optional: true,
   }),
 })
@@ -89,14 +105,16 @@ const adjusterSchema = object({
   .required('The preload adjuster is missing: say whether it is threaded, stepped or a spacer.')
   .test('adjuster-range', function (adjuster) {
     if (!adjuster) return true;
-    const min = isNum(adjuster.minPosition) ? adjuster.minPosition : 0;
-    if (isNum(adjuster.maxPosition) && adjuster.maxPosition <= min) {
+    if (adjuster.minPosition !== undefined && !within(adjuster.minPosition, POSITION)) return true;
+    const min = adjuster.minPosition ?? 0;
+    if (!within(adjuster.maxPosition, POSITION)) return true;
+    if (adjuster.maxPosition <= min) {
       return this.createError({
         path: `${this.path}.maxPosition`,
         message: "The adjuster's maximum must be above its minimum: check both settings.",
       });
     }
-    if (isNum(adjuster.position) && isNum(adjuster.maxPosition) && (adjuster.position < min || adjuster.position > adjuster.maxPosition)) {
+    if (within(adjuster.position, POSITION) && (adjuster.position < min || adjuster.position > adjuster.maxPosition)) {
       return this.createError({
         path: `${this.path}.position`,
         message: "The current setting lies outside the adjuster's range: re-count it from the adjuster's zero.",
@@ -106,8 +124,8 @@ const adjusterSchema = object({
   });
 
 function springTypeSchema(endName: string) {
-  return mixed().test('coil-only', function (value) {
-    if (value === undefined || value === null || value === 'coil') return true;
+  return mixed().nonNullable("Spring type must be 'coil', or left out.").test('coil-only', function (value) {
+    if (value === undefined || value === 'coil') return true;
     if (value === 'air') {
       return this.createError({
         message: `An air-sprung ${endName} cannot be sized here: this model sizes coil springs only. Set the air spring from its pressure chart instead.`,
@@ -146,42 +164,85 @@ function capitalise(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
+type Report = (field: string, message: string) => void;
+
 /** Checks that need the end's travel beside its readings and targets. */
-function checkEndAgainstTravel(context: TestContext, end: Record<string, unknown>, travel: unknown): true | ValidationError {
+function checkEndAgainstTravel(context: TestContext, end: Record<string, unknown>, travel: number | undefined): true | ValidationError {
   const errors: ValidationError[] = [];
-  const at = (field: string, message: string) => errors.push(context.createError({ path: `${context.path}.${field}`, message }));
+  const at: Report = (field, message) => errors.push(context.createError({ path: `${context.path}.${field}`, message }));
   if (end.secondRateNmm != null && end.breakMm == null) at('breakMm', 'A second rate needs its break point: give the spring compression where it starts.');
   if (end.breakMm != null && end.secondRateNmm == null) at('secondRateNmm', 'A break point needs the second rate: give the rate above it.');
 
   const readings = end.readings as Record<string, unknown> | undefined;
-  if (readings) {
-    const l0 = readings.extendedMm;
-    const l1 = meanOf(readings.staticMm);
-    const l2 = meanOf(readings.riderMm);
-    if (isNum(l0) && isNum(l1) && l1 > l0) {
-      at('readings.staticMm', 'The static length is longer than the extended length: re-measure both between the same two marks, the extended one with the wheel off the ground.');
-    } else if (isNum(l0) && isNum(l1) && isNum(travel) && l0 - l1 > travel) {
-      at('readings.staticMm', 'The static sag is more than the travel: re-measure the static and extended lengths, and check the travel.');
-    }
-    if (isNum(l1) && isNum(l2) && l2 > l1) {
-      at('readings.riderMm', 'The rider length is longer than the static length: re-measure with the rider aboard in riding position.');
-    } else if (isNum(l0) && isNum(l2) && isNum(travel) && l0 - l2 > travel) {
-      at('readings.riderMm', 'The rider sag is more than the travel: re-measure the rider and extended lengths, and check the travel.');
-    }
-  }
+  if (readings) checkReadingOrder(readings, travel, at);
 
   const target = end.target as Record<string, unknown> | undefined;
   if (target) {
-    const rider = target.riderSagMm;
-    const stat = target.staticSagMm;
-    if (isNum(rider) && isNum(travel) && rider > travel) at('target.riderSagMm', 'The target rider sag is more than the travel: lower it.');
-    if (isNum(rider) && isNum(stat) && stat >= rider) at('target.staticSagMm', 'The target static sag must be less than the target rider sag.');
+    const rider = within(target.riderSagMm, TARGET_SAG_MM, true) ? target.riderSagMm : undefined;
+    const stat = within(target.staticSagMm, TARGET_SAG_MM) ? target.staticSagMm : undefined;
+    if (rider !== undefined && travel !== undefined && rider > travel) at('target.riderSagMm', 'The target rider sag is more than the travel: lower it.');
+    if (rider !== undefined && stat !== undefined && stat >= rider) at('target.staticSagMm', 'The target static sag must be less than the target rider sag.');
   }
   return errors.length === 0 ? true : new ValidationError(errors);
 }
 
+/**
+ * L0 >= L1 >= L2 and the sags within the travel, judged only on readings that passed their own
+ * checks, and with the float noise of a mean allowed for (500.2 and 500.4 average to
+ * 500.29999999999995, which is 500.3).
+ */
+function checkReadingOrder(readings: Record<string, unknown>, travel: number | undefined, at: Report): void {
+  if (!isLength(readings.extendedMm)) return;
+  const l0 = readings.extendedMm;
+  const l1 = checkLoadedReading(readings.staticMm, 'staticMm', l0, at);
+  const l2 = checkLoadedReading(readings.riderMm, 'riderMm', l0, at);
+  if (l1 !== undefined && travel !== undefined && l0 - l1 > travel + SAME_LENGTH_MM) {
+    at('readings.staticMm', 'The static sag is more than the travel: re-measure the static and extended lengths, and check the travel.');
+  }
+  if (l2 === undefined) return;
+  if (l1 !== undefined && l2 > l1 + SAME_LENGTH_MM) {
+    at('readings.riderMm', 'The rider length is longer than the static length: re-measure with the rider aboard in riding position.');
+  } else if (travel !== undefined && l0 - l2 > travel + SAME_LENGTH_MM) {
+    at('readings.riderMm', 'The rider sag is more than the travel: re-measure the rider and extended lengths, and check the travel.');
+  }
+}
+
+const LOADED = {
+  staticMm: { name: 'static', longer: 'The static length is longer than the extended length: re-measure both between the same two marks, the extended one with the wheel off the ground.' },
+  riderMm: { name: 'rider', longer: 'The rider length is longer than the extended length: re-measure both between the same two marks, the extended one with the wheel off the ground.' },
+} as const;
+
+/**
+ * The mean of a loaded reading that is a length no longer than L0, or undefined after reporting
+ * why not. Each of a pushed and lifted pair is held to L0 on its own: friction can hold an end
+ * short of its rest, never beyond full extension.
+ */
+function checkLoadedReading(reading: unknown, field: keyof typeof LOADED, l0: number, at: Report): number | undefined {
+  const { name, longer } = LOADED[field];
+  if (isLength(reading)) {
+    if (reading <= l0 + SAME_LENGTH_MM) return reading;
+    at(`readings.${field}`, longer);
+    return undefined;
+  }
+  if (!reading || typeof reading !== 'object') return undefined;
+  const { pushedMm, liftedMm } = reading as { pushedMm?: unknown; liftedMm?: unknown };
+  if (!isLength(pushedMm) || !isLength(liftedMm)) return undefined;
+  const sides = [
+    ['pushedMm', pushedMm, 'after pushing down'],
+    ['liftedMm', liftedMm, 'after lifting'],
+  ] as const;
+  let fits = true;
+  for (const [side, length, words] of sides) {
+    if (length > l0 + SAME_LENGTH_MM) {
+      at(`readings.${field}.${side}`, `The ${name} length ${words} is longer than the extended length, which a loaded reading cannot be: re-measure it, and the extended one with the wheel off the ground.`);
+      fits = false;
+    }
+  }
+  return fits ? (pushedMm + liftedMm) / 2 : undefined;
+}
+
 const frontSchema = object({
-  travelMm: quantity('Fork travel', [30, 350], ' mm', 'give the travel along the fork axis, from the manual or measured'),
+  travelMm: quantity('Fork travel', FRONT_TRAVEL_MM, ' mm', 'give the travel along the fork axis, from the manual or measured'),
   springCount: number()
     .transform(readTyped)
     .typeError('Sprung legs must be 1 or 2: count the fork legs that hold a spring.')
@@ -191,27 +252,35 @@ const frontSchema = object({
   ...commonEndFields('fork', [0, 50]),
 })
   .default(undefined)
+  .nonNullable("The front end must give the fork's travel, spring and adjuster, or be left out.")
   .test('front-travel', function (front) {
-    return front ? checkEndAgainstTravel(this, front, front.travelMm) : true;
+    if (!front) return true;
+    return checkEndAgainstTravel(this, front, within(front.travelMm, FRONT_TRAVEL_MM) ? front.travelMm : undefined);
   });
 
 const rearSchema = object({
-  wheelTravelMm: quantity('Rear wheel travel', [30, 400], ' mm', 'give the vertical travel of the rear axle, from the manual or measured'),
-  shockStrokeMm: quantity('Shock stroke', [10, 200], ' mm', 'give the shock\'s travel from full extension to its bump stop'),
+  wheelTravelMm: quantity('Rear wheel travel', REAR_TRAVEL_MM, ' mm', 'give the vertical travel of the rear axle, from the manual or measured'),
+  shockStrokeMm: quantity('Shock stroke', STROKE_MM, ' mm', 'give the shock\'s travel from full extension to its bump stop'),
   gasForceN: quantity('Gas force', [0, 2000], ' N', "give the shock's gas force (pressure times rod area), or leave it out", {
     optional: true,
   }),
-  linkage: array().default(undefined).typeError('The linkage curve must be a list of [wheel mm, shock mm] points.'),
+  linkage: array()
+    .transform(readLinkagePoints)
+    .default(undefined)
+    .nonNullable('The linkage curve must be a list of [wheel mm, shock mm] points, or left out for a constant leverage ratio.')
+    .typeError('The linkage curve must be a list of [wheel mm, shock mm] points.'),
   ...commonEndFields('shock', [0, 500]),
 })
   .default(undefined)
+  .nonNullable("The rear end must give the shock's travel, stroke, spring and adjuster, or be left out.")
   .test('rear-travel', function (rear) {
     if (!rear) return true;
     const errors: ValidationError[] = [];
-    const travelCheck = checkEndAgainstTravel(this, rear, rear.wheelTravelMm);
+    const travel = within(rear.wheelTravelMm, REAR_TRAVEL_MM) ? rear.wheelTravelMm : undefined;
+    const stroke = within(rear.shockStrokeMm, STROKE_MM) ? rear.shockStrokeMm : undefined;
+    const travelCheck = checkEndAgainstTravel(this, rear, travel);
     if (travelCheck !== true) errors.push(travelCheck);
-    const { wheelTravelMm: travel, shockStrokeMm: stroke } = rear;
-    if (isNum(travel) && isNum(stroke) && (travel / stroke < 0.5 || travel / stroke > 6)) {
+    if (travel !== undefined && stroke !== undefined && (travel / stroke < 0.5 || travel / stroke > 6)) {
       errors.push(
         this.createError({
           path: `${this.path}.shockStrokeMm`,
@@ -226,7 +295,21 @@ const rearSchema = object({
     return errors.length === 0 ? true : new ValidationError(errors);
   });
 
-function findLinkageProblem(points: unknown[], travel: unknown, stroke: unknown): { at: string; message: string } | null {
+/** Linkage numbers typed as text go through the decimal-comma parser like every other number. */
+function readLinkagePoints(value: unknown): unknown {
+  if (!Array.isArray(value)) return value;
+  return value.map((point: unknown) =>
+    Array.isArray(point) ? point.map((v: unknown) => (typeof v === 'string' ? (parseUserNumber(v) ?? v) : v)) : point,
+  );
+}
+
+/**
+ * How far the last point may sit from [travel, stroke], as a share of each: both are read off a
+ * tape, and the engine takes the stated travel as the end of the curve.
+ */
+const LINKAGE_END_TOLERANCE = 0.01;
+
+function findLinkageProblem(points: unknown[], travel: number | undefined, stroke: number | undefined): { at: string; message: string } | null {
   if (points.length < 2 || points.length > 60) {
     return { at: '', message: 'The linkage curve needs 2 to 60 points of [wheel mm, shock mm].' };
   }
@@ -249,30 +332,31 @@ function findLinkageProblem(points: unknown[], travel: unknown, stroke: unknown)
     }
   }
   const last = pairs[pairs.length - 1];
-  if (isNum(travel) && isNum(stroke) && (Math.abs(last[0] - travel) > 0.5 || Math.abs(last[1] - stroke) > 0.5)) {
+  const off = (value: number, full: number) => Math.abs(value - full) > LINKAGE_END_TOLERANCE * full;
+  if (travel !== undefined && stroke !== undefined && (off(last[0], travel) || off(last[1], stroke))) {
     return {
       at: `[${pairs.length - 1}]`,
-      message: `The linkage curve must end at the full travel, [${travel}, ${stroke}]: re-measure the last point or check the travel and stroke.`,
+      message: `The linkage curve must end at the full travel, [${travel}, ${stroke}], to within 1 %: re-measure the last point or check the travel and stroke.`,
     };
   }
   return null;
 }
 
 const bikeSchema = object({
-  massKg: quantity('Bike wet mass', [30, 700], ' kg', 'weigh the bike as ridden, with fuel and oil'),
-  frontShare: quantity('Front weight share', [0, 1], '', "give the fraction of the bike's weight on the front wheel, e.g. 0.5"),
-  unsprungFrontKg: quantity('Unsprung front mass', [0, 150], ' kg', 'give the mass of the front wheel, tyre, brakes and fork lowers'),
-  unsprungRearKg: quantity('Unsprung rear mass', [0, 150], ' kg', 'give the mass of the rear wheel, tyre, brake and the swingarm share'),
+  massKg: quantity('Bike wet mass', BIKE_KG, ' kg', 'weigh the bike as ridden, with fuel and oil'),
+  frontShare: quantity('Front weight share', SHARE, '', "give the fraction of the bike's weight on the front wheel, e.g. 0.5"),
+  unsprungFrontKg: quantity('Unsprung front mass', UNSPRUNG_KG, ' kg', 'give the mass of the front wheel, tyre, brakes and fork lowers'),
+  unsprungRearKg: quantity('Unsprung rear mass', UNSPRUNG_KG, ' kg', 'give the mass of the rear wheel, tyre, brake and the swingarm share'),
 })
   .default(undefined)
   .required('The bike is missing: give its mass and weight shares.')
   .test('sprung-mass', function (bike) {
-    if (!bike || !isNum(bike.massKg) || !isNum(bike.frontShare)) return true;
+    if (!bike || !within(bike.massKg, BIKE_KG) || !within(bike.frontShare, SHARE)) return true;
     const errors: ValidationError[] = [];
-    if (isNum(bike.unsprungFrontKg) && bike.unsprungFrontKg >= bike.massKg * bike.frontShare) {
+    if (within(bike.unsprungFrontKg, UNSPRUNG_KG) && bike.unsprungFrontKg >= bike.massKg * bike.frontShare) {
       errors.push(this.createError({ path: `${this.path}.unsprungFrontKg`, message: "The unsprung front mass is as much as the bike's weight on the front wheel: re-check it and the front share." }));
     }
-    if (isNum(bike.unsprungRearKg) && bike.unsprungRearKg >= bike.massKg * (1 - bike.frontShare)) {
+    if (within(bike.unsprungRearKg, UNSPRUNG_KG) && bike.unsprungRearKg >= bike.massKg * (1 - bike.frontShare)) {
       errors.push(this.createError({ path: `${this.path}.unsprungRearKg`, message: "The unsprung rear mass is as much as the bike's weight on the rear wheel: re-check it and the front share." }));
     }
     return errors.length === 0 ? true : new ValidationError(errors);

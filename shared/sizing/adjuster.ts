@@ -35,35 +35,81 @@ export function computePreloadRange(
   return { min: Math.max(min, minCaptivePreloadMm), max };
 }
 
-export function planAdjustment(
+/**
+ * The settings a person can make for a needed preload: the nearest step of the resolution grid
+ * (counted from the current setting), then the step on its other side. Both stay inside the
+ * preload range: a stop can be set exactly, the captive minimum only from the first step above it.
+ */
+export function planAdjustments(
   adjuster: Adjuster,
   currentPreloadMm: number,
   neededPreloadMm: number,
   resolution: number,
-): AdjusterPlan {
+  rangeMm: RangeMm,
+): AdjusterPlan[] {
   const changeMm = neededPreloadMm - currentPreloadMm;
   const changeUnits = changeMm / adjuster.mmPerUnit;
+  const steps = changeUnits / resolution;
+  // Halves round away from zero, so removing preload rounds as adding does.
+  const nearest = Math.sign(steps) * Math.round(Math.abs(steps));
+  const other = nearest > steps ? Math.floor(steps) : Math.ceil(steps);
+  const [low, high] = findSettableBounds(adjuster, currentPreloadMm, resolution, rangeMm);
+  const limitedByRange = neededPreloadMm < rangeMm.min - 1e-9 || neededPreloadMm > rangeMm.max + 1e-9;
+  const positions = [nearest, other].map((j) =>
+    roundToNano(Math.min(high, Math.max(low, adjuster.position + j * resolution))),
+  );
+  const distinct = positions[1] === positions[0] ? positions.slice(0, 1) : positions;
+  return distinct.map((position) => {
+    // Float noise from the multiply would otherwise show as 1.2500000000000002 turns.
+    const roundedChangeUnits = roundToNano(position - adjuster.position);
+    return {
+      changeMm,
+      changeUnits,
+      roundedChangeUnits,
+      roundedChangeMm: roundedChangeUnits * adjuster.mmPerUnit,
+      position,
+      limitedByRange,
+      direction: roundedChangeUnits > 0 ? 'add' : roundedChangeUnits < 0 ? 'remove' : 'none',
+      unit: UNIT_OF[adjuster.kind],
+    };
+  });
+}
+
+/** Lowest and highest positions that may be set, the range's lower edge taken up onto the grid unless it is the stop. */
+function findSettableBounds(
+  adjuster: Adjuster,
+  currentPreloadMm: number,
+  resolution: number,
+  rangeMm: RangeMm,
+): [number, number] {
   const minPosition = adjuster.minPosition ?? 0;
-  const exact = adjuster.position + changeUnits;
-  const wanted = adjuster.position + Math.round(changeUnits / resolution) * resolution;
-  const position = Math.min(adjuster.maxPosition, Math.max(minPosition, wanted));
-  // Float noise from the multiply would otherwise show as 1.2500000000000002 turns.
-  const roundedChangeUnits = roundToNano(position - adjuster.position);
-  return {
-    changeMm,
-    changeUnits,
-    roundedChangeUnits,
-    roundedChangeMm: roundedChangeUnits * adjuster.mmPerUnit,
-    position: roundToNano(position),
-    // Rounding onto an end stop is still rounding; only a change the adjuster cannot make is limited.
-    limitedByRange: exact < minPosition - 1e-9 || exact > adjuster.maxPosition + 1e-9,
-    direction: roundedChangeUnits > 0 ? 'add' : roundedChangeUnits < 0 ? 'remove' : 'none',
-    unit: UNIT_OF[adjuster.kind],
-  };
+  const lowest = adjuster.position + (rangeMm.min - currentPreloadMm) / adjuster.mmPerUnit;
+  const low =
+    lowest <= minPosition + 1e-9
+      ? minPosition
+      : adjuster.position + Math.ceil((lowest - adjuster.position) / resolution - 1e-9) * resolution;
+  return [Math.min(low, adjuster.maxPosition), adjuster.maxPosition];
 }
 
 function roundToNano(value: number): number {
   return Math.round(value * 1e9) / 1e9;
+}
+
+const UNIT_WORDS: Record<'threaded' | 'stepped', [string, string]> = {
+  threaded: ['turn', 'turns'],
+  stepped: ['step', 'steps'],
+};
+
+/** "1 turn", "0.25 turns", "3 steps": a count of the adjuster's units as written. */
+function countOf(kind: 'threaded' | 'stepped', value: number): string {
+  const figure = formatNumber(value, 2);
+  const [one, many] = UNIT_WORDS[kind];
+  return `${figure} ${figure === '1' || figure === '-1' ? one : many}`;
+}
+
+/** An absolute setting, e.g. "6.25 turns" or "13.5 mm" of spacer. */
+export function describePosition(kind: AdjusterKind, position: number): string {
+  return kind === 'spacer' ? `${formatNumber(position, 2)} mm` : countOf(kind, position);
 }
 
 /** The change as a phrase, e.g. "add 1.25 turns of preload (to 6.25 turns)". */
@@ -71,12 +117,11 @@ export function describeAdjustment(
   kind: AdjusterKind,
   plan: Pick<AdjusterPlan, 'roundedChangeUnits' | 'position' | 'direction'>,
 ): string {
-  const amount = formatNumber(Math.abs(plan.roundedChangeUnits), 2);
-  const to = formatNumber(plan.position, 2);
   if (plan.direction === 'none') return 'leave the preload as it is';
+  const to = describePosition(kind, plan.position);
   if (kind === 'spacer') {
-    return `fit a spacer ${amount} mm ${plan.direction === 'add' ? 'longer' : 'shorter'} (${to} mm)`;
+    const amount = formatNumber(Math.abs(plan.roundedChangeUnits), 2);
+    return `fit a spacer ${amount} mm ${plan.direction === 'add' ? 'longer' : 'shorter'} (${to})`;
   }
-  const unit = kind === 'threaded' ? 'turns' : 'steps';
-  return `${plan.direction} ${amount} ${unit} of preload (to ${to} ${unit})`;
+  return `${plan.direction} ${countOf(kind, Math.abs(plan.roundedChangeUnits))} of preload (to ${to})`;
 }

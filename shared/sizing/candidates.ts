@@ -1,30 +1,34 @@
 /**
  * Catalogue springs for one end (section 5e): the preload each needs for the rider-sag target,
- * the static sag it then gives, whether it fits the adjuster and clears coil-bind; ranked by how
- * close static sag lands to its target, then by stock.
+ * whether it fits the adjuster and clears coil-bind, and the sags at the setting a person would
+ * make for it; ranked by how close static sag lands to its target, then by stock.
  */
 
 import type { Adjuster, CandidateResult, CatalogueSpring, LoadsN, RangeMm, WarningThresholds } from '../types/sizing';
-import { adjusterUnit, planAdjustment } from './adjuster';
+import { adjusterUnit } from './adjuster';
 import type { EndModel } from './end-model';
 import { formatNumber } from './format';
+import { chooseRoundedSetting } from './rounded-setting';
 import { makeSpringLaw } from './spring-law';
-import { toPercent } from './targets';
+import { toPercent, type SagWindows } from './targets';
 
 export interface CandidateSetting {
   adjuster: Adjuster;
   currentPreloadMm: number;
   preloadRangeMm: RangeMm;
-  riderTargetMm: number;
-  staticTargetMm: number;
+  /** Aimed at the middles (S*, T*); the windows pick between two adjuster steps. */
+  windows: SagWindows;
 }
 
 export interface RankedCandidates {
   candidates: CandidateResult[];
   best: CandidateResult | null;
   inStock: CandidateResult | null;
+  /** Springs that would be feasible but for coil-bind. */
   coilBound: number;
 }
+
+type Infeasibility = { kind: 'no-preload' | 'range' | 'coil-bind'; reason: string };
 
 export function rankCandidates(
   model: EndModel,
@@ -36,13 +40,11 @@ export function rankCandidates(
   const candidates: CandidateResult[] = [];
   let coilBound = 0;
   for (const spring of springs) {
-    const candidate = assessCandidate(model, spring, loads, setting, thresholds);
-    if (candidate.coilBindMarginMm !== null && candidate.coilBindMarginMm < thresholds.coilBindMarginMm) {
-      coilBound++;
-    }
+    const { candidate, problem } = assessCandidate(model, spring, loads, setting, thresholds);
+    if (problem?.kind === 'coil-bind') coilBound++;
     candidates.push(candidate);
   }
-  const target = setting.staticTargetMm;
+  const target = setting.windows.staticMiddleMm;
   const miss = (c: CandidateResult): number =>
     c.staticSagMm === null ? Number.MAX_VALUE : Math.abs(c.staticSagMm - target);
   candidates.sort(
@@ -63,54 +65,86 @@ function assessCandidate(
   loads: LoadsN,
   setting: CandidateSetting,
   thresholds: WarningThresholds,
-): CandidateResult {
+): { candidate: CandidateResult; problem: Infeasibility | null } {
   const law = makeSpringLaw(spring.rateNmm, spring.secondRateNmm, spring.breakMm);
   const available = spring.onHand - spring.reserved;
-  const preloadMm = model.preloadForSag(law, loads.staticN + loads.riderN, setting.riderTargetMm);
-  const plan =
+  const riderTargetMm = setting.windows.riderMiddleMm;
+  const preloadMm = model.preloadForSag(law, loads.staticN + loads.riderN, riderTargetMm);
+  const rounded =
     preloadMm === null
       ? null
-      : planAdjustment(setting.adjuster, setting.currentPreloadMm, preloadMm, thresholds.adjusterResolution[setting.adjuster.kind]);
-  const staticSagMm = preloadMm === null ? null : model.sagAtLoad(law, preloadMm, loads.staticN);
+      : chooseRoundedSetting(
+          model,
+          law,
+          loads,
+          {
+            adjuster: setting.adjuster,
+            currentPreloadMm: setting.currentPreloadMm,
+            resolution: thresholds.adjusterResolution[setting.adjuster.kind],
+            rangeMm: setting.preloadRangeMm,
+          },
+          preloadMm,
+          setting.windows,
+        );
+  const staticSagMm = rounded ? rounded.staticSagMm : null;
+  const riderSagMm = rounded ? rounded.riderSagMm : null;
   const coilBindMarginMm = preloadMm === null ? null : spring.maxDeflectionMm - (preloadMm + model.springStrokeMm);
-  const reason = explainInfeasible(preloadMm, coilBindMarginMm, setting.preloadRangeMm, thresholds.coilBindMarginMm);
-  return {
+  const problem = findInfeasibility(preloadMm, riderTargetMm, coilBindMarginMm, setting.preloadRangeMm, thresholds.coilBindMarginMm);
+  const candidate: CandidateResult = {
     sku: spring.sku,
     family: spring.family,
     rateNmm: spring.rateNmm,
     secondRateNmm: spring.secondRateNmm ?? null,
     breakMm: spring.breakMm ?? null,
     preloadMm,
-    preloadUnits: plan ? plan.roundedChangeUnits : null,
+    preloadUnits: rounded ? rounded.plan.roundedChangeUnits : null,
     unit: adjusterUnit(setting.adjuster.kind),
-    position: plan ? plan.position : null,
+    position: rounded ? rounded.plan.position : null,
+    setPreloadMm: rounded ? rounded.preloadMm : null,
     staticSagMm,
-    riderSagMm: preloadMm === null ? null : setting.riderTargetMm,
+    riderSagMm,
     staticSagPct: staticSagMm === null ? null : toPercent(staticSagMm, model.travelMm),
-    riderSagPct: preloadMm === null ? null : toPercent(setting.riderTargetMm, model.travelMm),
+    riderSagPct: riderSagMm === null ? null : toPercent(riderSagMm, model.travelMm),
+    toppedOut: staticSagMm === 0,
     coilBindMarginMm,
     available,
     inStock: available >= model.springsPerEnd,
-    feasible: reason === null,
-    reason,
+    feasible: problem === null,
+    reason: problem ? problem.reason : null,
   };
+  return { candidate, problem };
 }
 
-function explainInfeasible(
+function findInfeasibility(
   preloadMm: number | null,
+  riderTargetMm: number,
   coilBindMarginMm: number | null,
   range: RangeMm,
   requiredMarginMm: number,
-): string | null {
-  if (preloadMm === null || coilBindMarginMm === null) return 'The linkage gives no preload for the rider-sag target.';
+): Infeasibility | null {
+  if (preloadMm === null || coilBindMarginMm === null) {
+    return {
+      kind: 'no-preload',
+      reason: `No preload holds rider sag at ${formatNumber(riderTargetMm, 1)} mm on this linkage: the end comes to rest short of it, often topped out.`,
+    };
+  }
   if (preloadMm < range.min) {
-    return `Needs ${formatNumber(preloadMm, 1)} mm of preload, below the ${formatNumber(range.min, 1)} mm that keeps it captive in this adjuster.`;
+    return {
+      kind: 'range',
+      reason: `Needs ${formatNumber(preloadMm, 1)} mm of preload, below the ${formatNumber(range.min, 1)} mm that keeps it captive in this adjuster.`,
+    };
   }
   if (preloadMm > range.max) {
-    return `Needs ${formatNumber(preloadMm, 1)} mm of preload, more than the adjuster's ${formatNumber(range.max, 1)} mm.`;
+    return {
+      kind: 'range',
+      reason: `Needs ${formatNumber(preloadMm, 1)} mm of preload, more than the adjuster's ${formatNumber(range.max, 1)} mm.`,
+    };
   }
   if (coilBindMarginMm < requiredMarginMm) {
-    return `Would coil-bind: ${formatNumber(coilBindMarginMm, 1)} mm left at full travel, ${formatNumber(requiredMarginMm, 1)} mm needed.`;
+    return {
+      kind: 'coil-bind',
+      reason: `Would coil-bind: ${formatNumber(coilBindMarginMm, 1)} mm left at full travel, ${formatNumber(requiredMarginMm, 1)} mm needed.`,
+    };
   }
   return null;
 }

@@ -24,7 +24,10 @@ export interface EndModel {
   loadAtSag(spring: SpringLaw, preloadMm: number, sagMm: number): number;
   /** 0 when topped out (the clamp acts), null when the load would bottom the end. */
   sagAtLoad(spring: SpringLaw, preloadMm: number, loadN: number): number | null;
-  /** Preload that holds the end at this sag under the load; null where the geometry gives none. */
+  /**
+   * Preload that holds the end at this sag under the load; null where the geometry gives none,
+   * including where the end would come to rest short of it (a linkage whose x' falls).
+   */
   preloadForSag(spring: SpringLaw, loadN: number, sagMm: number): number | null;
   /** Spring compression at this sag and preload. */
   springDeflectionAt(preloadMm: number, sagMm: number): number;

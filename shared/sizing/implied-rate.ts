@@ -5,7 +5,7 @@
 
 import type { LoadsN } from '../types/sizing';
 import type { EndModel } from './end-model';
-import type { MeasuredSags } from './readings';
+import { findUncalibratable, type MeasuredSags } from './readings';
 
 export interface ImpliedRate {
   rateNmm: number;
@@ -14,8 +14,8 @@ export interface ImpliedRate {
 }
 
 export function computeImpliedRate(model: EndModel, measured: MeasuredSags, intakeLoads: LoadsN): ImpliedRate | null {
+  if (findUncalibratable(measured, model.travelMm) !== null) return null;
   const difference = measured.riderSagMm - measured.staticSagMm;
-  if (!(measured.staticSagMm > 0) || !(difference > 0)) return null;
   const fit = model.fitSingleRate(
     measured.staticSagMm,
     intakeLoads.staticN,

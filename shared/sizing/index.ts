@@ -11,4 +11,6 @@ export {
 } from './ride-preview';
 export { averageReading, measureSags, READING_PITFALLS, type MeasuredSags } from './readings';
 export { buildWarningThresholds, SETTING_KEYS, type EngineSettingValue } from './settings';
+export { computeParallelRate, computeSeriesRate } from './spring-combination';
 export type * from '../types/sizing';
+export * from './helical-spring';

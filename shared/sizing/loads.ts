@@ -5,6 +5,7 @@
 
 import type { BikeMasses, EndKind, LoadsN, RiderMasses } from '../types/sizing';
 import type { EndModel } from './end-model';
+import { findUncalibratable } from './readings';
 import type { SpringLaw } from './spring-law';
 
 /** Standard gravity, exact by definition (CGPM 1901; NIST SP 811). */
@@ -32,7 +33,7 @@ export function computeIntakeLoads(
 
 /**
  * Loads that the installed spring must carry to sit at the measured sags. Null unless both sags
- * show the end off its top and the rider's sag exceeds the static one: otherwise the readings
+ * show the end off its stops and the rider's sag exceeds the static one: otherwise the readings
  * only bound the loads.
  */
 export function calibrateLoads(
@@ -42,7 +43,7 @@ export function calibrateLoads(
   staticSagMm: number,
   riderSagMm: number,
 ): LoadsN | null {
-  if (!(staticSagMm > 0) || !(riderSagMm > staticSagMm)) return null;
+  if (findUncalibratable({ staticSagMm, riderSagMm }, model.travelMm) !== null) return null;
   const staticN = model.loadAtSag(spring, preloadMm, staticSagMm);
   const riderN = model.loadAtSag(spring, preloadMm, riderSagMm) - staticN;
   if (!(staticN > 0) || !(riderN > 0)) return null;

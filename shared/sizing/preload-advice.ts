@@ -1,11 +1,17 @@
 /** The current spring's preload change, rounded to the adjuster, and the sags the rounded setting gives. */
 
 import type { FrontRequest, LoadsN, PreloadAdvice, RangeMm, RearRequest, SizingWarning, WarningThresholds } from '../types/sizing';
-import { describeAdjustment, planAdjustment } from './adjuster';
+import { describeAdjustment, describePosition } from './adjuster';
 import type { EndModel } from './end-model';
+import { chooseRoundedSetting } from './rounded-setting';
 import type { SpringLaw } from './spring-law';
-import { warnBottomedOut, warnToppedOut } from './warnings';
+import type { SagWindows } from './targets';
+import { warnBottomedOut, warnRoundingOutsideWindow, warnToppedOut } from './warnings';
 
+/**
+ * windows: where some preload keeps both sags inside (verdict 'keep'), the rounding must too when
+ * either step of the adjuster does; null otherwise.
+ */
 export function advisePreload(
   model: EndModel,
   spring: SpringLaw,
@@ -13,21 +19,27 @@ export function advisePreload(
   loads: LoadsN,
   neededPreloadMm: number,
   rangeMm: RangeMm,
+  windows: SagWindows | null,
   thresholds: WarningThresholds,
   warnings: SizingWarning[],
 ): PreloadAdvice {
   const adjuster = request.adjuster;
-  const plan = planAdjustment(
-    adjuster,
-    request.preloadMm,
+  const setting = chooseRoundedSetting(
+    model,
+    spring,
+    loads,
+    { adjuster, currentPreloadMm: request.preloadMm, resolution: thresholds.adjusterResolution[adjuster.kind], rangeMm },
     neededPreloadMm,
-    thresholds.adjusterResolution[adjuster.kind],
+    windows,
   );
-  const setMm = request.preloadMm + plan.roundedChangeMm;
-  const riderSagAfterMm = model.sagAtLoad(spring, setMm, loads.staticN + loads.riderN);
-  const staticSagAfterMm = model.sagAtLoad(spring, setMm, loads.staticN);
+  const { plan, riderSagMm: riderSagAfterMm, staticSagMm: staticSagAfterMm } = setting;
   if (staticSagAfterMm === 0) warnings.push(warnToppedOut('Static sag at the new setting'));
   if (riderSagAfterMm === null) warnings.push(warnBottomedOut('Rider sag at the new setting'));
+  if (windows && setting.insideWindows === false) {
+    warnings.push(
+      warnRoundingOutsideWindow(describePosition(adjuster.kind, plan.position), riderSagAfterMm, staticSagAfterMm, windows),
+    );
+  }
   const phrase = describeAdjustment(adjuster.kind, plan);
   return {
     currentMm: request.preloadMm,

@@ -5,6 +5,12 @@
 
 import type { LengthReading, Readings } from '../types/sizing';
 
+/**
+ * Readings closer than this are the same length (mm): far below what a tape shows, far above the
+ * float noise of a mean (500.2 and 500.4 average to 500.29999999999995).
+ */
+export const SAME_LENGTH_MM = 1e-6;
+
 export interface MeasuredSags {
   staticSagMm: number;
   riderSagMm: number;
@@ -35,6 +41,21 @@ function spreadOf(reading: LengthReading): number | null {
 
 function isSwapped(reading: LengthReading): boolean {
   return typeof reading !== 'number' && reading.pushedMm > reading.liftedMm;
+}
+
+/**
+ * Why the sags cannot calibrate the loads, or null when they can. A reading that shows the end
+ * topped out or bottomed out gives only a bound, and with no more sag aboard than without there is
+ * no rider load to read.
+ */
+export function findUncalibratable(
+  measured: Pick<MeasuredSags, 'staticSagMm' | 'riderSagMm'>,
+  travelMm: number,
+): 'topped-out' | 'bottomed-out' | 'no-rider-sag' | null {
+  if (!(measured.staticSagMm >= SAME_LENGTH_MM)) return 'topped-out';
+  if (!(measured.riderSagMm <= travelMm - SAME_LENGTH_MM)) return 'bottomed-out';
+  if (!(measured.riderSagMm - measured.staticSagMm >= SAME_LENGTH_MM)) return 'no-rider-sag';
+  return null;
 }
 
 export function measureSags(readings: Readings): MeasuredSags {

@@ -1,7 +1,8 @@
 /**
  * The ride with the current spring against the recommended one: ride frequency (5g), the damping
  * ratio the same damper then gives (5h) and the preview's step figures (5i). Both springs are
- * rated where they would ride: each at its aimed rider sag.
+ * rated where they would ride: each at the setting a person can make for it, and the rider sag
+ * that setting gives.
  */
 
 import type { CandidateResult, EndResult, LoadsN } from '../types/sizing';
@@ -27,15 +28,14 @@ export function assessRide(
   loads: LoadsN,
   current: RideSetting,
   pick: CandidateResult | null,
-  riderTargetMm: number,
   dampingRatio: number,
   sameRatePct: number,
 ): Pick<EndResult, 'rideFrequencyHz' | 'dampingRatioScale' | 'reboundHint' | 'preview'> {
   const massKg = computeSprungMassKg(loads);
   const oldRate = model.wheelRateAt(current.spring, current.preloadMm, current.riderSagMm);
   const newRate =
-    pick && pick.preloadMm !== null
-      ? model.wheelRateAt(makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm), pick.preloadMm, riderTargetMm)
+    pick && pick.setPreloadMm !== null && pick.riderSagMm !== null
+      ? model.wheelRateAt(makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm), pick.setPreloadMm, pick.riderSagMm)
       : null;
   const currentHz = computeRideFrequencyHz(oldRate, massKg);
   const recommendedHz = newRate === null ? null : computeRideFrequencyHz(newRate, massKg);

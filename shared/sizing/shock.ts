@@ -14,6 +14,7 @@ import {
   shockAt,
   slopeAt,
 } from './linkage-curve';
+import { SAME_LENGTH_MM } from './readings';
 import { springDeflection, springForce, springRateAt, type SpringLaw } from './spring-law';
 
 export function makeShockModel(rear: RearRequest): EndModel {
@@ -49,6 +50,11 @@ function makeLinkageModel(rear: RearRequest): EndModel {
   const travelMm = rear.wheelTravelMm;
   const loadAtSag = (spring: SpringLaw, preloadMm: number, sagMm: number): number =>
     (springForce(spring, preloadMm + shockAt(curve, sagMm)) + gas) * slopeAt(curve, sagMm);
+  const sagAtLoad = (spring: SpringLaw, preloadMm: number, loadN: number): number | null => {
+    const sagMm = findFirstEquilibrium(curve, (y) => loadAtSag(spring, preloadMm, y), loadN);
+    // The last point may lie a little past the stated travel (the schema allows for reading error).
+    return sagMm !== null && sagMm <= travelMm ? sagMm : null;
+  };
   return {
     end: 'rear',
     travelMm,
@@ -56,12 +62,15 @@ function makeLinkageModel(rear: RearRequest): EndModel {
     springsPerEnd: 1,
     regressive: isRegressive(curve),
     loadAtSag,
-    sagAtLoad: (spring, preloadMm, loadN) =>
-      findFirstEquilibrium(curve, (y) => loadAtSag(spring, preloadMm, y), loadN),
+    sagAtLoad,
     preloadForSag(spring, loadN, sagMm) {
       const slope = slopeAt(curve, sagMm);
       if (!(slope > 0)) return null;
-      return springDeflection(spring, loadN / slope - gas) - shockAt(curve, sagMm);
+      const preloadMm = springDeflection(spring, loadN / slope - gas) - shockAt(curve, sagMm);
+      // Where x' falls, G can reach W earlier on the way down from full extension: the end then
+      // rests there (often topped out), and this preload does not hold it at sagMm.
+      const restsAt = sagAtLoad(spring, preloadMm, loadN);
+      return restsAt !== null && Math.abs(restsAt - sagMm) <= SAME_LENGTH_MM ? preloadMm : null;
     },
     springDeflectionAt: (preloadMm, sagMm) => preloadMm + shockAt(curve, sagMm),
     wheelRateAt(spring, preloadMm, sagMm) {

@@ -23,12 +23,13 @@ import type { EndModel } from './end-model';
 import { computeImpliedRate, isRateMismatch } from './implied-rate';
 import { calibrateLoads } from './loads';
 import { advisePreload } from './preload-advice';
-import { measureSags, type MeasuredSags } from './readings';
+import { findUncalibratable, measureSags, type MeasuredSags } from './readings';
 import { assessRide } from './ride-assessment';
 import { isDualRate, makeSpringLaw, secantRate, type SpringLaw } from './spring-law';
 import { areWindowsUsable, resolveSagWindows, toPercent, type SagWindows } from './targets';
 import { aimPreload, describeVerdict } from './verdict';
 import {
+  noteAdjusterStop,
   noteForkAir,
   noteGasForceUnknown,
   noteSingleRateEquivalent,
@@ -42,11 +43,13 @@ import {
   warnNoRiderLoad,
   warnNoRiderSag,
   warnRegressiveLinkage,
+  warnRiderReadingBottomed,
   warnSmallStaticSag,
   warnStaticReadingToppedOut,
   warnSwappedPair,
   warnTargetInvalid,
   warnToppedOut,
+  warnWindowUnreachable,
 } from './warnings';
 
 export interface EndInput {
@@ -119,8 +122,15 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     verdict = aim.verdict;
     aimRiderSagMm = aim.aimRiderSagMm;
     neededPreloadMm = aim.neededPreloadMm;
+    if (aim.unreachable) {
+      warnings.push(warnWindowUnreachable(aim.unreachable, aim.unreachable === 'rider' ? windows.riderSagMm : windows.staticSagMm));
+    }
+    if (aim.limitedByAdjuster && aim.middlePreloadMm !== null && neededPreloadMm !== null) {
+      warnings.push(noteAdjusterStop(windows.riderMiddleMm, aim.middlePreloadMm, neededPreloadMm, aimRiderSagMm));
+    }
     if (neededPreloadMm !== null) {
-      preload = advisePreload(model, spring, request, loads, neededPreloadMm, preloadRangeMm, context.thresholds, warnings);
+      const keepWindows = verdict === 'keep' ? windows : null;
+      preload = advisePreload(model, spring, request, loads, neededPreloadMm, preloadRangeMm, keepWindows, thresholds, warnings);
       if (verdict === 'preload-out-of-range' || preload.limitedByRange) {
         warnings.push(warnAdjusterRange(neededPreloadMm, preloadRangeMm));
       }
@@ -131,24 +141,22 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     model,
     input.springs,
     loads,
-    {
-      adjuster: request.adjuster,
-      currentPreloadMm,
-      preloadRangeMm,
-      riderTargetMm: windows.riderMiddleMm,
-      staticTargetMm: windows.staticMiddleMm,
-    },
+    { adjuster: request.adjuster, currentPreloadMm, preloadRangeMm, windows },
     thresholds,
   );
   if (ranked.coilBound > 0) warnings.push(warnCoilBind(ranked.coilBound, thresholds.coilBindMarginMm));
   if (!ranked.best) warnings.push(warnNoCandidate(input.springs.length));
 
+  // The current spring rides at the setting it can be given, not at a preload beyond its adjuster.
+  const currentSetting =
+    preload && preload.riderSagAfterMm !== null
+      ? { spring, preloadMm: preload.currentMm + preload.roundedChangeMm, riderSagMm: preload.riderSagAfterMm }
+      : { spring, preloadMm: currentPreloadMm, riderSagMm: riderSagMm ?? aimRiderSagMm };
   const ride = assessRide(
     model,
     loads,
-    { spring, preloadMm: neededPreloadMm ?? currentPreloadMm, riderSagMm: aimRiderSagMm },
+    currentSetting,
     ranked.inStock ?? ranked.best,
-    windows.riderMiddleMm,
     input.dampingRatio,
     thresholds.sameRatePct,
   );
@@ -227,14 +235,11 @@ function calibrateReadings(
     warnings.push(warnFrictionBand('rider', measured.riderSpreadMm, spreadLimitMm));
   }
   for (const which of measured.swappedPairs) warnings.push(warnSwappedPair(which));
-  if (!(measured.staticSagMm > 0)) {
-    warnings.push(warnStaticReadingToppedOut(end));
-    return null;
-  }
-  if (!(measured.riderSagMm > measured.staticSagMm)) {
-    warnings.push(warnNoRiderSag());
-    return null;
-  }
+  const unusable = findUncalibratable(measured, model.travelMm);
+  if (unusable === 'topped-out') warnings.push(warnStaticReadingToppedOut(end));
+  if (unusable === 'bottomed-out') warnings.push(warnRiderReadingBottomed(end));
+  if (unusable === 'no-rider-sag') warnings.push(warnNoRiderSag());
+  if (unusable) return null;
   const loads = calibrateLoads(model, spring, preloadMm, measured.staticSagMm, measured.riderSagMm);
   if (!loads) warnings.push(warnNoRiderSag());
   return loads;

@@ -57,6 +57,14 @@ export function areWindowsUsable(windows: SagWindows): boolean {
   );
 }
 
+/** Allowance for the float noise of a sag computed back from a preload aimed at a window's edge. */
+const WINDOW_EDGE_MM = 1e-6;
+
+/** Window edges count as inside; a bottomed-out sag (null) never does. */
+export function isInsideWindow(sagMm: number | null, window: RangeMm): boolean {
+  return sagMm !== null && sagMm >= window.min - WINDOW_EDGE_MM && sagMm <= window.max + WINDOW_EDGE_MM;
+}
+
 export function toPercent(mm: number, travelMm: number): number {
   return (mm / travelMm) * 100;
 }

@@ -2,20 +2,34 @@
  * Verdict with the installed spring (section 5c): can some preload put both sags inside their
  * windows, and inside the adjuster's range? Aim rider sag at the middle of its window unless that
  * pushes static sag out, then at the nearest rider sag that keeps both in.
+ *
+ * Worked in preload: the spring force rises with preload at every point of travel, so each sag
+ * only falls as preload rises and each window is one band of preloads. That holds on a linkage
+ * whose sag jumps past part of its travel too, where a rider sag need not map to any preload.
  */
 
 import type { LoadsN, RangeMm, Verdict } from '../types/sizing';
 import type { EndModel } from './end-model';
-import { findRoot } from './find-root';
 import { formatNumber } from './format';
 import type { SpringLaw } from './spring-law';
-import type { SagWindows } from './targets';
+import { isInsideWindow, type SagWindows } from './targets';
 
 export interface PreloadAim {
   verdict: Verdict;
   aimRiderSagMm: number;
   neededPreloadMm: number | null;
+  /** Preload that puts rider sag in the middle of its window. */
+  middlePreloadMm: number | null;
+  /** The adjuster's range, not the windows, moved the aim off the middle. */
+  limitedByAdjuster: boolean;
+  /** A window that no preload reaches, as the sag jumps past it. */
+  unreachable: 'rider' | 'static' | null;
 }
+
+/** The search for a preload gives up beyond this (mm): no spring is preloaded by a kilometre. */
+const PRELOAD_SEARCH_LIMIT_MM = 1e6;
+/** Bisected preloads are found to this (mm): sag moves a few times as far, still well inside a window's edge allowance. */
+const PRELOAD_TOLERANCE_MM = 1e-8;
 
 export function aimPreload(
   model: EndModel,
@@ -25,39 +39,101 @@ export function aimPreload(
   rangeMm: RangeMm,
 ): PreloadAim {
   const totalN = loads.staticN + loads.riderN;
-  // Static sag once preload puts rider sag at r: non-decreasing in r, as less preload lets both sink.
-  const staticFor = (riderSagMm: number): number => {
-    const preload = model.preloadForSag(spring, totalN, riderSagMm);
-    if (preload === null) return riderSagMm;
-    return model.sagAtLoad(spring, preload, loads.staticN) ?? model.travelMm;
+  const riderSagAt = (preloadMm: number) => model.sagAtLoad(spring, preloadMm, totalN);
+  const staticSagAt = (preloadMm: number) => model.sagAtLoad(spring, preloadMm, loads.staticN);
+  const rider = findPreloadBand(model, spring, totalN, windows.riderSagMm);
+  const stat = findPreloadBand(model, spring, loads.staticN, windows.staticSagMm);
+  const middle = findHoldingPreload(model, spring, totalN, windows.riderMiddleMm);
+  const aim = (
+    verdict: Verdict,
+    preloadMm: number,
+    unreachable: PreloadAim['unreachable'] = null,
+    limitedByAdjuster = false,
+  ): PreloadAim => {
+    const finite = Number.isFinite(preloadMm);
+    return {
+      verdict,
+      aimRiderSagMm: (finite ? riderSagAt(preloadMm) : null) ?? windows.riderMiddleMm,
+      neededPreloadMm: finite ? preloadMm : null,
+      middlePreloadMm: Number.isFinite(middle) ? middle : null,
+      limitedByAdjuster,
+      unreachable,
+    };
   };
-  const { min: lo, max: hi } = windows.riderSagMm;
-  const { min: tMin, max: tMax } = windows.staticSagMm;
-  const middle = windows.riderMiddleMm;
-  const finish = (verdict: Verdict, aimRiderSagMm: number): PreloadAim => ({
-    verdict,
-    aimRiderSagMm,
-    neededPreloadMm: model.preloadForSag(spring, totalN, aimRiderSagMm),
+  // No preload serves: aim at the middle, as a spring of the right rate would be set.
+  const misfit = (verdict: 'too-soft' | 'too-stiff', unreachable: PreloadAim['unreachable']): PreloadAim => ({
+    ...aim(verdict, middle, unreachable),
+    aimRiderSagMm: windows.riderMiddleMm,
   });
+  const missesRider = (preloadMm: number) => !isInsideWindow(riderSagAt(preloadMm), windows.riderSagMm);
+  const middleUnreachable = Number.isFinite(middle) && missesRider(middle) ? 'rider' : null;
 
-  const staticAtLo = staticFor(lo);
-  const staticAtHi = staticFor(hi);
-  if (staticAtLo > tMax) return finish('too-stiff', middle);
-  if (staticAtHi < tMin) return finish('too-soft', middle);
+  if (rider.max < stat.min) return misfit('too-stiff', middleUnreachable);
+  if (rider.min > stat.max) return misfit('too-soft', middleUnreachable);
+  const both = { min: Math.max(rider.min, stat.min), max: Math.min(rider.max, stat.max) };
+  const reachable = { min: Math.max(both.min, rangeMm.min), max: Math.min(both.max, rangeMm.max) };
+  const inRange = reachable.min <= reachable.max;
+  const preloadMm = clamp(middle, inRange ? reachable : both);
 
-  const fromWindow = staticAtLo >= tMin ? lo : findRoot((r) => staticFor(r) - tMin, lo, hi);
-  const toWindow = staticAtHi <= tMax ? hi : findRoot((r) => staticFor(r) - tMax, lo, hi);
-  // More preload, less rider sag: the adjuster's ends bound the rider sag it can give.
-  const fromAdjuster = model.sagAtLoad(spring, rangeMm.max, totalN) ?? model.travelMm;
-  const toAdjuster = model.sagAtLoad(spring, rangeMm.min, totalN) ?? model.travelMm;
-  const from = Math.max(fromWindow, fromAdjuster);
-  const to = Math.min(toWindow, toAdjuster);
-  if (rangeMm.min <= rangeMm.max && from <= to) return finish('keep', clamp(middle, from, to));
-  return finish('preload-out-of-range', clamp(middle, fromWindow, toWindow));
+  // Bands that overlap yet hold no sag in its window: the sag jumps past it. A rider sag deeper
+  // than its window, or a static sag shallower, leaves too much between the two (too soft, 5c).
+  const riderSag = riderSagAt(preloadMm);
+  if (!isInsideWindow(riderSag, windows.riderSagMm)) {
+    return misfit(riderSag === null || riderSag > windows.riderSagMm.max ? 'too-soft' : 'too-stiff', 'rider');
+  }
+  const staticSag = staticSagAt(preloadMm);
+  if (!isInsideWindow(staticSag, windows.staticSagMm)) {
+    return misfit(staticSag === null || staticSag > windows.staticSagMm.max ? 'too-stiff' : 'too-soft', 'static');
+  }
+  if (!inRange) return aim('preload-out-of-range', preloadMm);
+  return aim('keep', preloadMm, null, preloadMm !== clamp(middle, both));
 }
 
-function clamp(value: number, min: number, max: number): number {
-  return Math.min(max, Math.max(min, value));
+/** Preloads that keep the sag under this load inside the window: from its deep edge to its shallow one. */
+function findPreloadBand(model: EndModel, spring: SpringLaw, loadN: number, window: RangeMm): RangeMm {
+  return { min: findHoldingPreload(model, spring, loadN, window.max), max: findHoldingPreload(model, spring, loadN, window.min) };
+}
+
+/**
+ * The least preload that holds the end at this sag or above it. Where no preload rests the end
+ * exactly there (its sag jumps past), bisect for the preload at which it jumps.
+ */
+function findHoldingPreload(model: EndModel, spring: SpringLaw, loadN: number, sagMm: number): number {
+  const exact = model.preloadForSag(spring, loadN, sagMm);
+  if (exact !== null) return exact;
+  const holds = (preloadMm: number): boolean => {
+    const sag = model.sagAtLoad(spring, preloadMm, loadN);
+    return sag !== null && sag <= sagMm;
+  };
+  // Bracket the jump, doubling away from zero preload, then bisect it.
+  let holding = 0;
+  let loose = 0;
+  if (holds(0)) {
+    loose = -1;
+    while (holds(loose)) {
+      if (loose < -PRELOAD_SEARCH_LIMIT_MM) return -Infinity;
+      holding = loose;
+      loose *= 2;
+    }
+  } else {
+    holding = 1;
+    while (!holds(holding)) {
+      if (holding > PRELOAD_SEARCH_LIMIT_MM) return Infinity;
+      loose = holding;
+      holding *= 2;
+    }
+  }
+  while (holding - loose > PRELOAD_TOLERANCE_MM) {
+    const mid = (holding + loose) / 2;
+    if (mid === holding || mid === loose) break;
+    if (holds(mid)) holding = mid;
+    else loose = mid;
+  }
+  return holding;
+}
+
+function clamp(value: number, range: RangeMm): number {
+  return Math.min(range.max, Math.max(range.min, value));
 }
 
 export function describeVerdict(

@@ -46,6 +46,14 @@ export function warnStaticReadingToppedOut(end: EndKind): SizingWarning {
   );
 }
 
+export function warnRiderReadingBottomed(end: EndKind): SizingWarning {
+  return warning(
+    'bottomed-out',
+    `The rider reading shows the ${END_NAME[end]} at the end of its travel, so the reading gives only a bound on the load.`,
+    'Figures use the intake weights. Check the travel, then measure again with more preload or a stiffer spring fitted.',
+  );
+}
+
 export function warnToppedOut(which: string): SizingWarning {
   return warning(
     'topped-out',
@@ -99,6 +107,37 @@ export function warnAdjusterRange(neededMm: number | null, range: RangeMm): Sizi
     'adjuster-range',
     `${needed} is outside what the adjuster gives (${formatNumber(range.min, 1)} to ${formatNumber(range.max, 1)} mm, keeping the spring captive).`,
     'The setting shown stops at the adjuster\'s end; a spring of another rate or length, or a spacer, would reach the target.',
+  );
+}
+
+export function noteAdjusterStop(middleSagMm: number, middlePreloadMm: number, stopMm: number, aimSagMm: number): SizingWarning {
+  return note(
+    'adjuster-range',
+    `Rider sag in the middle of its window (${formatNumber(middleSagMm, 1)} mm) needs ${formatNumber(middlePreloadMm, 1)} mm of preload, but the adjuster stops at ${formatNumber(stopMm, 1)} mm: the preload is aimed at ${formatNumber(aimSagMm, 1)} mm of rider sag instead.`,
+    'Both sags stay inside their windows. A spring nearer the ideal rate, or a spacer, would reach the middle.',
+  );
+}
+
+export function warnRoundingOutsideWindow(
+  setting: string,
+  riderSagMm: number | null,
+  staticSagMm: number | null,
+  windows: { riderSagMm: RangeMm; staticSagMm: RangeMm },
+): SizingWarning {
+  const sag = (which: string, value: number | null, window: RangeMm) =>
+    `${value === null ? `a bottomed-out ${which} sag` : `${formatNumber(value, 1)} mm of ${which} sag`} (window ${formatNumber(window.min, 1)} to ${formatNumber(window.max, 1)} mm)`;
+  return warning(
+    'rounding-outside-window',
+    `No setting the adjuster can make keeps both sags inside their windows: the nearest, ${setting}, gives ${sag('rider', riderSagMm, windows.riderSagMm)} and ${sag('static', staticSagMm, windows.staticSagMm)}.`,
+    'One step of this adjuster moves the sags further than the windows allow; a finer adjuster, a spacer, or a spring nearer the ideal rate would fit.',
+  );
+}
+
+export function warnWindowUnreachable(which: 'rider' | 'static', window: RangeMm): SizingWarning {
+  return warning(
+    'window-unreachable',
+    `No preload holds the ${which} sag inside its window (${formatNumber(window.min, 1)} to ${formatNumber(window.max, 1)} mm): on this linkage it jumps past the window as preload changes.`,
+    'The curve loses slope there; re-measure those points. A spring of another rate comes to rest elsewhere on the curve.',
   );
 }
 

@@ -175,7 +175,9 @@ export type WarningCode =
   | 'single-rate-equivalent'
   | 'weights-mode'
   | 'no-candidate'
-  | 'target-invalid';
+  | 'target-invalid'
+  | 'window-unreachable'
+  | 'rounding-outside-window';
 
 export interface SizingWarning {
   code: WarningCode;
@@ -206,7 +208,7 @@ export interface TargetUsed {
   /** Middles of the windows (S*, T*). */
   riderMiddleMm: number;
   staticMiddleMm: number;
-  /** Rider sag the current spring's preload is aimed at (the middle, or the nearest that keeps both sags in). */
+  /** Rider sag the current spring's preload is aimed at: the middle, or the nearest that keeps both sags in and the adjuster reaches. */
   aimRiderSagMm: number;
 }
 
@@ -233,7 +235,7 @@ export interface PreloadAdvice {
   roundedChangeMm: number;
   /** Absolute adjuster setting after the rounded change. */
   position: number;
-  /** The change needs more than the adjuster gives; the setting stops at its end. */
+  /** The needed preload lies outside rangeMm (the adjuster's stops, the captive minimum); the setting stops at its edge. */
   limitedByRange: boolean;
   rangeMm: RangeMm;
   riderSagAfterMm: number | null;
@@ -247,15 +249,20 @@ export interface CandidateResult {
   rateNmm: number;
   secondRateNmm: number | null;
   breakMm: number | null;
+  /** Unrounded preload that holds rider sag at S*; null where none does (a linkage whose x' falls). */
   preloadMm: number | null;
   /** Rounded change from the current setting, in adjuster units. */
   preloadUnits: number | null;
   unit: AdjusterUnit;
   position: number | null;
+  /** Preload at that rounded setting; the sags below are the ones it gives. */
+  setPreloadMm: number | null;
   staticSagMm: number | null;
   riderSagMm: number | null;
   staticSagPct: number | null;
   riderSagPct: number | null;
+  /** Static sag at the setting is 0: the preload holds the end topped out without the rider. */
+  toppedOut: boolean;
   coilBindMarginMm: number | null;
   available: number;
   inStock: boolean;

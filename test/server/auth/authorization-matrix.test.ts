@@ -11,6 +11,8 @@ import { apiRoutes } from '../../../server/routes';
 import { RouteSpec } from '../../../server/routes/route-table';
 import { makeTestContext, TestContext } from '../test-context';
 import { bearer, createAccount, RAISED_LIMITS } from './helpers';
+import { prepareCatalogueFixtures } from '../catalogue/helpers';
+import { makeRiderFlowFixtures } from '../rider/helpers';
 
 type Expected = 'public' | readonly Role[];
 
@@ -33,6 +35,57 @@ const expectations: Record<string, Expected> = {
   'GET /target-profiles': everyone,
   'GET /dev/outbox': ['admin'],
   'GET /dev/outbox/:id': ['admin'],
+  'GET /catalogue/springs': everyone,
+  'GET /catalogue/springs.csv': ['counter', 'admin'],
+  'GET /catalogue/springs/:id': everyone,
+  'POST /catalogue/springs': ['counter', 'admin'],
+  'PATCH /catalogue/springs/:id': ['counter', 'admin'],
+  'POST /catalogue/springs/:id/deactivate': ['counter', 'admin'],
+  'POST /catalogue/springs/:id/reactivate': ['counter', 'admin'],
+  'GET /catalogue/families': everyone,
+  'GET /catalogue/rates-for-fit': everyone,
+  'GET /catalogue/low-stock': ['counter', 'admin'],
+  'GET /catalogue/low-stock.csv': ['counter', 'admin'],
+  'POST /catalogue/identify': ['counter', 'admin', 'desk'],
+  'POST /stock/:id/receive': ['counter', 'admin'],
+  'POST /stock/:id/count': ['counter', 'admin'],
+  'POST /stock/:id/reserve': ['counter', 'admin', 'desk'],
+  'POST /stock/:id/release': ['counter', 'admin', 'desk'],
+  'POST /stock/:id/fit': ['counter', 'admin', 'desk'],
+  'GET /stock/movements': ['counter', 'admin'],
+  'GET /stock/movements.csv': ['counter', 'admin'],
+  'POST /imports/dry-run': ['counter', 'admin'],
+  'POST /imports': ['counter', 'admin'],
+  'GET /imports': ['counter', 'admin'],
+  'GET /imports/:id': ['counter', 'admin'],
+  'GET /bike-models': everyone,
+  'GET /bike-models/:id': everyone,
+  'POST /bike-models': ['admin'],
+  'PUT /bike-models/:id': ['admin'],
+  'DELETE /bike-models/:id': ['admin'],
+  'GET /bikes': everyone,
+  'POST /bikes': everyone,
+  'GET /bikes/:id': everyone,
+  'PUT /bikes/:id': everyone,
+  'DELETE /bikes/:id': everyone,
+  'GET /me/units': everyone,
+  'PUT /me/units': everyone,
+  'GET /weigh-in': everyone,
+  'PUT /weigh-in': everyone,
+  'GET /bikes/:id/draft': everyone,
+  'PUT /bikes/:id/draft': everyone,
+  'POST /bikes/:id/draft': everyone,
+  'DELETE /bikes/:id/draft': everyone,
+  'POST /bikes/:id/sizing-records': everyone,
+  'GET /bikes/:id/sizing-records': everyone,
+  'GET /sizing-records/:id': everyone,
+  'GET /bikes/:id/setup-log': everyone,
+  'POST /bikes/:id/setup-log': everyone,
+  'GET /bikes/:id/setup-log/back-to-baseline': everyone,
+  'PUT /target-profiles/:discipline': ['admin'],
+  'GET /engine-settings': ['admin'],
+  'PATCH /engine-settings': ['admin'],
+  'GET /audit': ['admin'],
 };
 
 const key = (route: RouteSpec) => `${route.method.toUpperCase()} ${route.path}`;
@@ -52,10 +105,39 @@ beforeAll(async () => {
   const mailId = t.outbox?.list()[0]?.id;
   if (!mailId) throw new Error('the outbox caught no mail');
   const target = String(accounts.rider.id);
+  const catalogue = await prepareCatalogueFixtures(t, accounts.counter.id);
+  const flow = await makeRiderFlowFixtures(t, accounts.rider, accounts.admin);
   params = {
     'PATCH /users/:id/role': { id: target },
     'PATCH /users/:id/active': { id: target },
     'GET /dev/outbox/:id': { id: mailId },
+    'GET /catalogue/springs/:id': { id: catalogue.springId },
+    'PATCH /catalogue/springs/:id': { id: catalogue.springId },
+    'POST /catalogue/springs/:id/deactivate': { id: catalogue.springId },
+    'POST /catalogue/springs/:id/reactivate': { id: catalogue.springId },
+    'POST /stock/:id/receive': { id: catalogue.springId },
+    'POST /stock/:id/count': { id: catalogue.springId },
+    'POST /stock/:id/reserve': { id: catalogue.springId },
+    'POST /stock/:id/release': { id: catalogue.springId },
+    'POST /stock/:id/fit': { id: catalogue.springId },
+    'GET /imports/:id': { id: catalogue.batchId },
+    'GET /bike-models/:id': { id: flow.modelId },
+    'PUT /bike-models/:id': { id: flow.modelId },
+    'DELETE /bike-models/:id': { id: flow.doomedModelId },
+    'GET /bikes/:id': { id: flow.bikeId },
+    'PUT /bikes/:id': { id: flow.bikeId },
+    'DELETE /bikes/:id': { id: flow.doomedBikeId },
+    'GET /bikes/:id/draft': { id: flow.bikeId },
+    'PUT /bikes/:id/draft': { id: flow.bikeId },
+    'POST /bikes/:id/draft': { id: flow.bikeId },
+    'DELETE /bikes/:id/draft': { id: flow.bikeId },
+    'POST /bikes/:id/sizing-records': { id: flow.bikeId },
+    'GET /bikes/:id/sizing-records': { id: flow.bikeId },
+    'GET /sizing-records/:id': { id: flow.recordId },
+    'GET /bikes/:id/setup-log': { id: flow.bikeId },
+    'POST /bikes/:id/setup-log': { id: flow.bikeId },
+    'GET /bikes/:id/setup-log/back-to-baseline': { id: flow.bikeId },
+    'PUT /target-profiles/:discipline': { discipline: 'road' },
   };
   routes = apiRoutes(t);
 });

@@ -117,6 +117,57 @@ describe('sizing request schema', () => {
     expect(Object.keys(fields).sort()).toEqual(['front.springType', 'rear.linkage[0]', 'rear.readings.staticMm', 'rider.bodyKg']);
   });
 
+  it('compares readings allowing for the float noise of a mean', () => {
+    // 500.2 and 500.4 average to 500.29999999999995 in binary floating point: a rider reading of 500.3
+    // is the same length, not a longer one.
+    const body = structuredClone(fullRequest()) as unknown as Record<string, any>;
+    body.front.travelMm = 150;
+    body.front.readings = { extendedMm: 600, staticMm: { pushedMm: 500.2, liftedMm: 500.4 }, riderMm: 500.3 };
+    expect(validateSizingRequest(body)).toMatchObject({ ok: true });
+  });
+
+  it('holds each of a pushed and lifted pair to the extended length', () => {
+    // Lifted 610 with L0 600: the pair's mean (590) is shorter, but a loaded reading cannot be longer than L0.
+    const fields = fieldsFor((r) => (r.front.readings.staticMm = { pushedMm: 570, liftedMm: 610 }));
+    expect(fields['front.readings.staticMm.liftedMm']).toMatch(/longer than the extended length/);
+    expect(Object.keys(fields)).toEqual(['front.readings.staticMm.liftedMm']);
+  });
+
+  it('judges the order of readings and masses only on values that passed their own checks', () => {
+    // A negative static length is refused for itself, not also as shorter than the rider length.
+    expect(fieldsFor((r) => (r.front.readings.staticMm = -5))).toEqual({ 'front.readings.staticMm': expect.stringMatching(/above 0/) });
+    // A front share of 1.2 is refused for itself, not also for leaving no weight on the rear wheel.
+    expect(fieldsFor((r) => (r.bike.frontShare = 1.2))).toEqual({ 'bike.frontShare': expect.stringMatching(/between 0 and 1/) });
+    // A travel out of range is not used to judge the sags or the target.
+    expect(Object.keys(fieldsFor((r) => (r.front.travelMm = 20)))).toEqual(['front.travelMm']);
+  });
+
+  it('says in plain words that an end or a linkage given as null must be given or left out', () => {
+    expect(fieldsFor((r) => (r.front = null)).front).toMatch(/^The front end must give .* or be left out\.$/);
+    expect(fieldsFor((r) => (r.rear.linkage = null))['rear.linkage']).toMatch(/list of \[wheel mm, shock mm\] points, or left out/);
+    expect(fieldsFor((r) => (r.front.readings = null))['front.readings']).toMatch(/or left out/);
+  });
+
+  it('reads linkage numbers typed with a decimal comma', () => {
+    const body = structuredClone(fullRequest()) as unknown as Record<string, any>;
+    body.rear.linkage = [['0', '0'], ['60,5', ' 22,25 '], [125, '50']];
+    const validation = validateSizingRequest(body);
+    expect(validation.ok && validation.value.rear?.linkage).toEqual([
+      [0, 0],
+      [60.5, 22.25],
+      [125, 50],
+    ]);
+  });
+
+  it('lets the last linkage point sit within 1 % of the full travel and stroke', () => {
+    // Travel 125 mm, stroke 50 mm: 1 % is 1.25 mm and 0.5 mm.
+    const body = structuredClone(fullRequest()) as unknown as Record<string, any>;
+    body.rear.linkage[2] = [124, 49.6];
+    expect(validateSizingRequest(body).ok).toBe(true);
+    expect(fieldsFor((r) => (r.rear.linkage[2] = [123.5, 50]))['rear.linkage[2]']).toMatch(/within 1 %/);
+    expect(fieldsFor((r) => (r.rear.linkage[2] = [125, 50.6]))['rear.linkage[2]']).toMatch(/within 1 %/);
+  });
+
   it('refuses a body that is not an object', () => {
     expect(validateSizingRequest(null)).toEqual({ ok: false, fields: { '': expect.stringMatching(/missing/) } });
     expect(validateSizingRequest('road')).toEqual({ ok: false, fields: { '': expect.stringMatching(/must be an object/) } });

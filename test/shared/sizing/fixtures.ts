@@ -84,8 +84,11 @@ export function collectNumbers(value: unknown, path = '', out: [string, number][
   return out;
 }
 
-const reading = (extendedMm: number, sagMm: number, spreadMm: number, paired: boolean) =>
-  paired ? { pushedMm: extendedMm - sagMm - spreadMm / 2, liftedMm: extendedMm - sagMm + spreadMm / 2 } : extendedMm - sagMm;
+/** A loaded reading at this sag; a pair straddles it, but no reading is longer than the extended one. */
+function reading(extendedMm: number, sagMm: number, spreadMm: number, paired: boolean) {
+  const half = Math.min(spreadMm / 2, sagMm);
+  return paired ? { pushedMm: extendedMm - sagMm - half, liftedMm: extendedMm - sagMm + half } : extendedMm - sagMm;
+}
 
 function arbitraryReadings(travelMm: number) {
   return fc

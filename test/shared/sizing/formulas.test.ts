@@ -8,6 +8,17 @@ import { aimPreload } from '@shared/sizing/verdict';
 import type { SagWindows } from '@shared/sizing/targets';
 import { forkSpring, roadFront, roadRear, shockSpring, thresholds } from './fixtures';
 
+/** Windows of the given half-widths around a rider-sag and a static-sag middle. */
+function windowsAround(riderMm: number, riderHalfMm: number, staticMm: number, staticHalfMm: number): SagWindows {
+  return {
+    source: 'request',
+    riderSagMm: { min: riderMm - riderHalfMm, max: riderMm + riderHalfMm },
+    staticSagMm: { min: staticMm - staticHalfMm, max: staticMm + staticHalfMm },
+    riderMiddleMm: riderMm,
+    staticMiddleMm: staticMm,
+  };
+}
+
 const g = 9.80665; // standard gravity, exact (CGPM 1901; NIST SP 811)
 
 describe('loads (section 2)', () => {
@@ -172,11 +183,18 @@ describe('verdict with target windows (section 5c)', () => {
     expect(aimPreload(fork, makeSpringLaw(30), loads, windows, wide).verdict).toBe('too-stiff');
   });
 
-  it('uses the adjuster range before calling preload out of range', () => {
+  it('uses the adjuster range before calling preload out of range, and says the aim moved', () => {
     // With at most 15 mm of preload, rider sag is at least 54 - 15 = 39 mm: still inside, so keep at 39.
     const limited = aimPreload(fork, makeSpringLaw(10), loads, windows, { min: 2, max: 15 });
     expect(limited.verdict).toBe('keep');
     expect(limited.aimRiderSagMm).toBeCloseTo(39, 9);
+    expect(limited.neededPreloadMm).toBeCloseTo(15, 12);
+    // The middle (36.6 mm) needs 1080/20 - 36.6 = 17.4 mm: the adjuster, not a window, moved the aim.
+    expect(limited.limitedByAdjuster).toBe(true);
+    expect(limited.middlePreloadMm).toBeCloseTo(17.4, 12);
+    expect(aimPreload(fork, makeSpringLaw(10), loads, windows, wide).limitedByAdjuster).toBe(false);
+    // A window that moves the aim (9 N/mm, above) is not the adjuster's doing.
+    expect(aimPreload(fork, makeSpringLaw(9), loads, windows, wide).limitedByAdjuster).toBe(false);
     // At most 10 mm: rider sag at least 44 mm, beyond the 39.6 mm window.
     expect(aimPreload(fork, makeSpringLaw(10), loads, windows, { min: 2, max: 10 }).verdict).toBe('preload-out-of-range');
   });
@@ -193,20 +211,24 @@ describe('candidate springs (section 5e)', () => {
         adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 4, maxPosition: 12 },
         currentPreloadMm: 6,
         preloadRangeMm: { min: 2, max: 18 },
-        riderTargetMm: 38,
-        staticTargetMm: 10,
+        windows: windowsAround(38, 3, 10, 5),
       },
       thresholds,
     );
     const pick = ranked.candidates[0];
-    // p = 912*2.5/100 - 38/2.5 = 22.8 - 15.2 = 7.6 mm; static = 456*6.25/100 - 2.5*7.6 = 28.5 - 19 = 9.5 mm.
+    // p = 912*2.5/100 - 38/2.5 = 22.8 - 15.2 = 7.6 mm (unrounded static would be 456*6.25/100 - 2.5*7.6 = 9.5 mm).
     expect(pick.preloadMm).toBeCloseTo(7.6, 12);
-    expect(pick.staticSagMm).toBeCloseTo(9.5, 12);
     // 90 mm max deflection - (7.6 + 50 mm stroke) = 32.4 mm.
     expect(pick.coilBindMarginMm).toBeCloseTo(32.4, 12);
-    // (7.6 - 6)/1.5 = 1.0667 turns, rounded to a quarter: 1 turn, position 5.
+    // (7.6 - 6)/1.5 = 1.0667 turns, rounded to a quarter: 1 turn, position 5, so 6 + 1.5 = 7.5 mm is set.
     expect(pick.preloadUnits).toBe(1);
     expect(pick.position).toBe(5);
+    expect(pick.setPreloadMm).toBeCloseTo(7.5, 12);
+    // The sags of that setting: rider 2.5*(22.8 - 7.5) = 38.25 mm, static 2.5*(11.4 - 7.5) = 9.75 mm.
+    expect(pick.riderSagMm).toBeCloseTo(38.25, 12);
+    expect(pick.staticSagMm).toBeCloseTo(9.75, 12);
+    expect(pick.riderSagPct).toBeCloseTo(30.6, 12); // 38.25 / 125
+    expect(pick.toppedOut).toBe(false);
     expect(pick.feasible).toBe(true);
   });
 
@@ -227,8 +249,7 @@ describe('candidate springs (section 5e)', () => {
         adjuster: { kind: 'spacer', mmPerUnit: 1, position: 10, maxPosition: 30 },
         currentPreloadMm: 10,
         preloadRangeMm: { min: 2, max: 30 },
-        riderTargetMm: 36,
-        staticTargetMm: 18,
+        windows: windowsAround(36, 3, 18, 4),
       },
       thresholds,
     );
@@ -250,6 +271,54 @@ describe('candidate springs (section 5e)', () => {
     expect(ten.preloadUnits).toBe(8);
   });
 
+  it('flags a setting whose static sag is clamped at 0 as topped out', () => {
+    // Rider target 10 mm on k = 10: p = 1080/20 - 10 = 44 mm; static = 720/20 - 44 = -8 mm, clamped to 0.
+    const fork = makeForkModel(roadFront({ springCount: 2, rakeDeg: 0, travelMm: 120 }));
+    const ranked = rankCandidates(
+      fork,
+      [forkSpring('F10', 10)],
+      { staticN: 720, riderN: 360 },
+      {
+        adjuster: { kind: 'spacer', mmPerUnit: 1, position: 10, maxPosition: 50 },
+        currentPreloadMm: 10,
+        preloadRangeMm: { min: 2, max: 50 },
+        windows: windowsAround(10, 2, 2, 2),
+      },
+      thresholds,
+    );
+    const pick = ranked.candidates[0];
+    expect(pick.preloadMm).toBeCloseTo(44, 12);
+    expect(pick.riderSagMm).toBeCloseTo(10, 12);
+    expect(pick.staticSagMm).toBe(0);
+    expect(pick.toppedOut).toBe(true);
+  });
+
+  it('counts coil-bind only among springs that would otherwise be feasible', () => {
+    const fork = makeForkModel(roadFront({ springCount: 2, rakeDeg: 0, travelMm: 120 }));
+    // F10: p = 18 mm, in range, but 140 - (18 + 120) = 2 mm < 3 mm of margin: refused for coil-bind.
+    // F40: p = 1080/80 - 36 = -22.5 mm, out of range; 100 - (-22.5 + 120) = 2.5 mm would bind too,
+    // but it is refused for its preload, so it is not counted.
+    const springs = [
+      { ...forkSpring('F10', 10), maxDeflectionMm: 140 },
+      { ...forkSpring('F40', 40), maxDeflectionMm: 100 },
+    ];
+    const ranked = rankCandidates(
+      fork,
+      springs,
+      { staticN: 720, riderN: 360 },
+      {
+        adjuster: { kind: 'spacer', mmPerUnit: 1, position: 10, maxPosition: 30 },
+        currentPreloadMm: 10,
+        preloadRangeMm: { min: 2, max: 30 },
+        windows: windowsAround(36, 3, 18, 4),
+      },
+      thresholds,
+    );
+    expect(ranked.candidates.find((c) => c.sku === 'F40')?.coilBindMarginMm).toBeCloseTo(2.5, 12);
+    expect(ranked.candidates.find((c) => c.sku === 'F40')?.reason).toMatch(/captive/);
+    expect(ranked.coilBound).toBe(1);
+  });
+
   it('refuses a spring that would coil-bind', () => {
     const fork = makeForkModel(roadFront({ springCount: 2, rakeDeg: 0, travelMm: 120 }));
     const tight = { ...forkSpring('F10', 10), maxDeflectionMm: 140 }; // 140 - (18 + 120) = 2 mm < 3 mm margin
@@ -261,8 +330,7 @@ describe('candidate springs (section 5e)', () => {
         adjuster: { kind: 'spacer', mmPerUnit: 1, position: 10, maxPosition: 30 },
         currentPreloadMm: 10,
         preloadRangeMm: { min: 2, max: 30 },
-        riderTargetMm: 36,
-        staticTargetMm: 18,
+        windows: windowsAround(36, 3, 18, 4),
       },
       thresholds,
     );

@@ -6,10 +6,11 @@ import {
   shockAt,
   slopeAt,
 } from '@shared/sizing/linkage-curve';
+import { sizeBike } from '@shared/sizing';
 import { makeShockModel } from '@shared/sizing/shock';
 import { makeSpringLaw } from '@shared/sizing/spring-law';
 import type { LinkagePoint, RearRequest } from '@shared/types/sizing';
-import { arbitraryLinkage, roadRear } from './fixtures';
+import { arbitraryLinkage, makeContext, roadRear, roadRequest } from './fixtures';
 
 /**
  * An independent PCHIP written straight from SciPy's documentation of PchipInterpolator:
@@ -297,5 +298,90 @@ describe('linkage curve: PCHIP with Fritsch-Butland slopes', () => {
     expect(model.sagAtLoad(makeSpringLaw(50), 20, 300)).toBe(0);
     // G(120) = 50*(5 + 54)*0.525 = 1548.75 N < 2000 N: it would bottom.
     expect(model.sagAtLoad(makeSpringLaw(50), 5, 2000)).toBeNull();
+  });
+
+  it('judges regression on the measured secants, not on the interpolant', () => {
+    // Secants 8.75/25 = 0.35, 0.35, 11/25 = 0.44, 12.5/25 = 0.5, 0.5: they never fall, though the
+    // PCHIP slope dips to 0.339 near 30 mm (the interpolant keeps x monotone, not x').
+    const steady: LinkagePoint[] = [
+      [0, 0],
+      [25, 8.75],
+      [50, 17.5],
+      [75, 28.5],
+      [100, 41],
+      [125, 53.5],
+    ];
+    const curve = buildLinkageCurve(steady);
+    expect(slopeAt(curve, 30)).toBeLessThan(0.345);
+    expect(isRegressive(curve)).toBe(false);
+    // A secant 0.5 % below the steepest before it is typing noise; 2 % below it is a dip.
+    const after = (second: number): LinkagePoint[] => [
+      [0, 0],
+      [25, 10],
+      [50, 10 + 25 * second],
+      [75, 20 + 25 * second],
+    ];
+    expect(isRegressive(buildLinkageCurve(after(0.4 * 0.995)))).toBe(false);
+    expect(isRegressive(buildLinkageCurve(after(0.4 * 0.98)))).toBe(true);
+  });
+
+  describe('where G(y) falls back below W (a regressive curve)', () => {
+    const regressive: LinkagePoint[] = [
+      [0, 0],
+      [20, 12],
+      [40, 18],
+      [60, 22],
+      [80, 28],
+      [100, 38],
+      [125, 50],
+    ];
+    // Road rear load of the fixtures' bike: (110 - 25) g + 88*0.65 g = 142.2 g = 1394.50563 N.
+    const loadN = 142.2 * 9.80665;
+
+    it('gives no preload for a sag the end would not come to rest at', () => {
+      const model = makeShockModel(rearWith(regressive));
+      const spring = makeSpringLaw(120);
+      // Solving G(38.125) = W directly: p = W/x'(38.125) - x(38.125) = 29.9 mm. With that preload,
+      // k*p*x'(0) = 120 * 29.9 * 0.75 = 2693 N >= W: the end stays topped out, never reaching 38 mm.
+      const slope0 = slopeAt(buildLinkageCurve(regressive), 0);
+      const direct = loadN / (120 * slopeAt(buildLinkageCurve(regressive), 38.125)) - shockAt(buildLinkageCurve(regressive), 38.125);
+      expect(120 * direct * slope0).toBeGreaterThan(loadN);
+      expect(model.sagAtLoad(spring, direct, loadN)).toBe(0);
+      expect(model.preloadForSag(spring, loadN, 38.125)).toBeNull();
+      // Past the dip the sag is a first equilibrium, and the preload for it round-trips.
+      const deep = model.preloadForSag(spring, loadN, 75) as number;
+      expect(deep).not.toBeNull();
+      expect(model.sagAtLoad(spring, deep, loadN)).toBeCloseTo(75, 9);
+    });
+
+    it('lists no catalogue spring as feasible at a preload that leaves the bike topped out', () => {
+      const rear = roadRear({ linkage: regressive, adjuster: { kind: 'threaded', mmPerUnit: 1, position: 5, maxPosition: 40 } });
+      const result = sizeBike(roadRequest({ front: undefined, rear }), makeContext()).rear!;
+      expect(result.recommendation.best).toBeNull();
+      for (const candidate of result.recommendation.candidates) {
+        expect(candidate.feasible).toBe(false);
+        expect(candidate.reason).toMatch(/No preload holds rider sag at 38.1 mm/);
+      }
+      // Nor does the verdict keep the installed spring: no preload holds rider sag in its window.
+      expect(result.verdict).not.toBe('keep');
+      expect(result.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['regressive-linkage', 'window-unreachable']));
+    });
+
+  });
+
+  it('reports for every candidate the sags that its rounded setting gives', () => {
+    // Each reported sag is the model's first equilibrium at the preload that will be set, not the target.
+    const rear = rearWith(PROGRESSIVE, { adjuster: { kind: 'threaded', mmPerUnit: 1, position: 5, maxPosition: 40 } });
+    const model = makeShockModel(rear);
+    const result = sizeBike(roadRequest({ front: undefined, rear }), makeContext()).rear!;
+    const { staticN, riderN } = result.loads;
+    const set = result.recommendation.candidates.filter((c) => c.setPreloadMm !== null);
+    expect(set.length).toBeGreaterThan(0);
+    for (const c of set) {
+      const spring = makeSpringLaw(c.rateNmm);
+      expect(c.riderSagMm).toBeCloseTo(model.sagAtLoad(spring, c.setPreloadMm as number, staticN + riderN) as number, 9);
+      expect(c.staticSagMm).toBeCloseTo(model.sagAtLoad(spring, c.setPreloadMm as number, staticN) as number, 9);
+    }
+    expect(set.some((c) => Math.abs((c.riderSagMm as number) - result.target.riderMiddleMm) > 1e-3)).toBe(true);
   });
 });

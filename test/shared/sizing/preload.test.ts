@@ -1,6 +1,11 @@
 import { sizeBike } from '@shared/sizing';
-import type { EndResult, FrontRequest, RearRequest, SizingRequest } from '@shared/types/sizing';
-import { makeContext, roadFront, roadRear, roadRequest } from './fixtures';
+import { describeAdjustment, planAdjustments } from '@shared/sizing/adjuster';
+import { makeForkModel } from '@shared/sizing/fork';
+import { advisePreload } from '@shared/sizing/preload-advice';
+import { makeSpringLaw } from '@shared/sizing/spring-law';
+import type { SagWindows } from '@shared/sizing/targets';
+import type { Adjuster, EndResult, FrontRequest, RearRequest, SizingRequest, SizingWarning } from '@shared/types/sizing';
+import { makeContext, roadFront, roadRear, roadRequest, thresholds } from './fixtures';
 
 const context = makeContext();
 
@@ -91,5 +96,101 @@ describe('preload change in adjuster units (section 5f)', () => {
     expect(collar.direction).toBe(collar.roundedChangeUnits > 0 ? 'add' : 'remove');
     expect(collar.instruction).toMatch(/^(Add|Remove) [\d.]+ turns of preload \(to [\d.]+ turns\)\.$/);
     expect(collar.position).toBeCloseTo(4 + collar.roundedChangeUnits, 12);
+  });
+});
+
+describe('rounding onto what a person can set (section 5f)', () => {
+  const collar: Adjuster = { kind: 'threaded', mmPerUnit: 1, position: 5, maxPosition: 15 };
+  const wide = { min: 0, max: 10 };
+
+  it('rounds halves away from zero, alike for adding and removing preload', () => {
+    // +-0.125 mm on a 1 mm/turn collar is +-0.125 turns, half a quarter turn either way.
+    const [add] = planAdjustments(collar, 5, 5.125, 0.25, wide);
+    const [remove] = planAdjustments(collar, 5, 4.875, 0.25, wide);
+    expect(add.roundedChangeUnits).toBe(0.25);
+    expect(remove.roundedChangeUnits).toBe(-0.25);
+  });
+
+  it('never sets less than the captive minimum: from the first step above it when it falls between steps', () => {
+    // p0 = 5 mm at 5 turns, captive minimum 2.1 mm: 2.1 mm sits at 2.1 turns, so the first quarter
+    // turn above it, 2.25 turns (2.25 mm), is the least that may be set.
+    const [plan] = planAdjustments(collar, 5, -4, 0.25, { min: 2.1, max: 15 });
+    expect(plan.position).toBe(2.25);
+    expect(plan.roundedChangeMm).toBeCloseTo(-2.75, 12);
+    expect(plan.limitedByRange).toBe(true);
+    // 2.05 mm lies within the stops (0 to 15 turns) but below the captive minimum: limited as well.
+    expect(planAdjustments(collar, 5, 2.05, 0.25, { min: 2.1, max: 15 })[0].limitedByRange).toBe(true);
+    // The adjuster's own stop can be set exactly, on the grid or not.
+    expect(planAdjustments({ ...collar, position: 5.1 }, 5, -10, 0.25, { min: -0.1, max: 14.9 })[0].position).toBe(0);
+  });
+
+  it('writes one unit in the singular', () => {
+    expect(describeAdjustment('stepped', { roundedChangeUnits: 1, position: 3, direction: 'add' })).toBe('add 1 step of preload (to 3 steps)');
+    expect(describeAdjustment('threaded', { roundedChangeUnits: -1, position: 1, direction: 'remove' })).toBe('remove 1 turn of preload (to 1 turn)');
+    expect(describeAdjustment('threaded', { roundedChangeUnits: 0.25, position: 5.25, direction: 'add' })).toBe('add 0.25 turns of preload (to 5.25 turns)');
+    expect(describeAdjustment('spacer', { roundedChangeUnits: 1, position: 11, direction: 'add' })).toBe('fit a spacer 1 mm longer (11 mm)');
+  });
+
+  describe('a setting that keeps both sags inside their windows', () => {
+    // Upright fork, two 10 N/mm springs, W_S = 720 N, W_S + W_R = 1080 N: rider sag 54 - p, static 36 - p.
+    const fork = makeForkModel(roadFront({ springCount: 2, rakeDeg: 0, travelMm: 120 }));
+    const front = roadFront({ rateNmm: 10, preloadMm: 10, adjuster: { kind: 'stepped', mmPerUnit: 4, position: 0, maxPosition: 10 } });
+    const windowsOf = (rider: [number, number], stat: [number, number]): SagWindows => ({
+      source: 'request',
+      riderSagMm: { min: rider[0], max: rider[1] },
+      staticSagMm: { min: stat[0], max: stat[1] },
+      riderMiddleMm: (rider[0] + rider[1]) / 2,
+      staticMiddleMm: (stat[0] + stat[1]) / 2,
+    });
+    const advise = (windows: SagWindows) => {
+      const warnings: SizingWarning[] = [];
+      // 17.4 mm needed from 10 mm is 7.4 mm, 1.85 steps of 4 mm: the nearest step is 2.
+      const advice = advisePreload(fork, makeSpringLaw(10), front, { staticN: 720, riderN: 360 }, 17.4, { min: 2, max: 50 }, windows, thresholds, warnings);
+      return { advice, codes: warnings.map((w) => w.code) };
+    };
+
+    it('takes the other step when the nearest leaves a window and the other does not', () => {
+      // 2 steps: p = 18 mm, rider sag 36 mm < 36.5. 1 step: p = 14 mm, rider 40 mm, static 22 mm, both inside.
+      const { advice, codes } = advise(windowsOf([36.5, 40.5], [17, 23]));
+      expect(advice.position).toBe(1);
+      expect(advice.riderSagAfterMm).toBeCloseTo(40, 12);
+      expect(advice.staticSagAfterMm).toBeCloseTo(22, 12);
+      expect(advice.instruction).toBe('Add 1 step of preload (to 1 step).');
+      expect(codes).not.toContain('rounding-outside-window');
+    });
+
+    it('keeps the nearest step and warns when neither keeps both inside', () => {
+      // 2 steps: rider 36 mm < 36.2; 1 step: rider 40 mm > 37.
+      const { advice, codes } = advise(windowsOf([36.2, 37], [17, 23]));
+      expect(advice.position).toBe(2);
+      expect(codes).toContain('rounding-outside-window');
+    });
+  });
+
+  it('warns when a stepped cam cannot keep static sag in its window (readings 640 / 628 / 596)', () => {
+    // LR = 130/52 = 2.5, S_S = 12 mm, S_R = 44 mm; road rear windows on 130 mm: rider 36.4-42.9, static 6.5-15.6.
+    // dp = (44 - 39.65)/2.5 = 1.74 mm = 0.58 steps of 3 mm. One step moves both sags 7.5 mm:
+    // rider 36.5, static 4.5 (out); no step leaves rider sag at 44 (out).
+    const request = roadRequest({
+      bike: { massKg: 200, frontShare: 0.5, unsprungFrontKg: 15, unsprungRearKg: 25 },
+      rider: { bodyKg: 85, gearKg: 10, luggageKg: 0, rearShare: 0.6 },
+      front: undefined,
+      rear: roadRear({
+        wheelTravelMm: 130,
+        shockStrokeMm: 52,
+        gasForceN: 200,
+        rateNmm: 95,
+        preloadMm: 6,
+        adjuster: { kind: 'stepped', mmPerUnit: 3, position: 2, maxPosition: 6 },
+        readings: { extendedMm: 640, staticMm: 628, riderMm: 596 },
+      }),
+    });
+    const rear = endOf(request, 'rear');
+    expect(rear.verdict).toBe('keep');
+    expect(rear.preload?.changeUnits).toBeCloseTo(0.58, 12);
+    expect(rear.preload?.staticSagAfterMm).toBeCloseTo(4.5, 9);
+    expect(rear.preload?.instruction).toBe('Add 1 step of preload (to 3 steps).');
+    const warning = rear.warnings.find((w) => w.code === 'rounding-outside-window');
+    expect(warning?.message).toMatch(/3 steps, gives 36.5 mm of rider sag \(window 36.4 to 42.9 mm\) and 4.5 mm of static sag \(window 6.5 to 15.6 mm\)/);
   });
 });

@@ -86,6 +86,30 @@ describe('properties of the engine (fast-check)', () => {
     );
   });
 
+  it('never advises a setting outside the preload range: the adjuster\'s stops and the captive minimum', () => {
+    const requests = fc.oneof(arbitraryRequest(), arbitraryEdgeRequest());
+    fc.assert(
+      fc.property(requests, arbitraryCatalogue(), (request, springs) => {
+        const validation = validateSizingRequest(request);
+        fc.pre(validation.ok);
+        if (!validation.ok) return;
+        const result = sizeBike(validation.value, makeContext({ springs }));
+        for (const end of ends) {
+          const preload = result[end]?.preload;
+          if (!preload || preload.rangeMm.min > preload.rangeMm.max) continue;
+          const { min, max } = preload.rangeMm;
+          const settings = [preload.currentMm + preload.roundedChangeMm, ...result[end]!.recommendation.candidates.map((c) => c.setPreloadMm)];
+          for (const set of settings) {
+            if (set === null) continue;
+            expect(set).toBeGreaterThanOrEqual(min - 1e-6);
+            expect(set).toBeLessThanOrEqual(max + 1e-6);
+          }
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   /** One way to break a valid request, and the field path that must then carry a message. */
   type Breakage = [string, (r: SizingRequest) => boolean];
   const breakages: Breakage[] = [

@@ -1,4 +1,6 @@
 import { ENGINE_VERSION, sizeBike } from '@shared/sizing';
+import { makeShockModel } from '@shared/sizing/shock';
+import { makeSpringLaw } from '@shared/sizing/spring-law';
 import type { EndResult, LinkagePoint, SizingRequest, WarningCode } from '@shared/types/sizing';
 import { collectNumbers, forkSpring, makeContext, roadFront, roadProfile, roadRear, roadRequest, shockSpring } from './fixtures';
 
@@ -146,6 +148,28 @@ describe('sizeBike: from readings', () => {
     expect(flat.impliedRateNmm).toBeNull();
   });
 
+  it('takes readings equal to within float noise as equal: no rider sag, no calibration', () => {
+    // Rider pair 500.2/500.4 averages to 500.29999999999995, not 500.3: S_R - S_S = 6e-14 mm, which
+    // would otherwise calibrate a rider load of almost nothing and imply a rate of about 1e14 N/mm.
+    const front = run(
+      roadRequest({ front: roadFront({ travelMm: 150, readings: { extendedMm: 600, staticMm: 500.3, riderMm: { pushedMm: 500.2, liftedMm: 500.4 } } }) }),
+    ).front!;
+    expect(codes(front)).toContain('reading-order');
+    expect(front.loads.source).toBe('intake');
+    expect(front.impliedRateNmm).toBeNull();
+  });
+
+  it('takes a rider reading at full travel as a bound only: warns and falls back to the weights', () => {
+    // L0 600, L2 480 on a 120 mm fork: rider sag 120 mm, the whole travel.
+    const bottomed = run(roadRequest({ front: roadFront({ readings: { extendedMm: 600, staticMm: 560, riderMm: 480 } }) })).front!;
+    const warning = bottomed.warnings.find((w) => w.code === 'bottomed-out');
+    expect(warning?.message).toMatch(/rider reading .* only a bound/);
+    expect(warning?.hint).toMatch(/intake weights/);
+    expect(bottomed.loads.source).toBe('intake');
+    expect(bottomed.loads.calibrated).toBeNull();
+    expect(bottomed.impliedRateNmm).toBeNull();
+  });
+
   it('says the end is topped out when the static reading shows no sag, and falls back to the weights', () => {
     const topped = run(roadRequest({ front: roadFront({ readings: { extendedMm: 600, staticMm: 600, riderMm: 585 } }) })).front!;
     expect(codes(topped)).toContain('topped-out');
@@ -162,6 +186,57 @@ describe('sizeBike: verdicts, candidates and the ride', () => {
     expect(front.preload?.position).toBe(8);
     expect(codes(front)).toContain('adjuster-range');
     expect(front.verdictText).toMatch(/outside the adjuster/);
+  });
+
+  it('never advises a preload below the captive minimum (2 mm, common practice)', () => {
+    // Upright fork, two 20 N/mm springs, p0 = 5 mm at 5 turns: W_S = 90 g = 882.5985 N, W_R = 30.8 g = 302.0448 N.
+    // Static sag 882.5985/40 - p = 22.065 - p; the 26.4 mm static maximum needs p = -4.335 mm.
+    const front = run(
+      roadRequest({ front: roadFront({ rakeDeg: 0, rateNmm: 20, preloadMm: 5, adjuster: { kind: 'threaded', mmPerUnit: 1, position: 5, maxPosition: 15 } }) }),
+    ).front!;
+    expect(front.verdict).toBe('preload-out-of-range');
+    expect(front.preload?.neededMm).toBeCloseTo(882.5985 / 40 - 26.4, 9);
+    expect(front.preload?.limitedByRange).toBe(true);
+    // The setting stops at 2 mm (2 turns), not at the adjuster's 0, where the spring would be loose.
+    expect(front.preload?.position).toBe(2);
+    expect((front.preload?.currentMm as number) + (front.preload?.roundedChangeMm as number)).toBeCloseTo(2, 12);
+    expect(front.preload?.instruction).toBe('Remove 3 turns of preload (to 2 turns).');
+    expect(front.preload?.staticSagAfterMm).toBeCloseTo(882.5985 / 40 - 2, 9);
+  });
+
+  it('notes when the adjuster, not a window, keeps rider sag off the middle', () => {
+    // Rear 120 N/mm at LR 2.5, p0 = 8 mm, 1.5 mm/turn with 10/3 turns left: at most 13 mm of preload.
+    // The middle, 38.125 mm, needs 1394.50563*2.5/120 - 38.125/2.5 = 13.802 mm; at 13 mm rider sag is
+    // 2.5*(29.0522 - 13) = 40.13 mm and static 2.5*(17.3659 - 13) = 10.91 mm, both inside.
+    const rear = run(
+      roadRequest({ rear: roadRear({ adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 5, maxPosition: 5 + 10 / 3 } }) }),
+    ).rear!;
+    expect(rear.verdict).toBe('keep');
+    expect(rear.target.aimRiderSagMm).toBeCloseTo(40.1305, 4);
+    const note = rear.warnings.find((w) => w.code === 'adjuster-range');
+    expect(note?.level).toBe('note');
+    expect(note?.message).toMatch(/middle of its window \(38.1 mm\) needs 13.8 mm of preload, but the adjuster stops at 13 mm: .* 40.1 mm of rider sag instead/);
+  });
+
+  it('rates the current spring for the ride at the preload the adjuster can give', () => {
+    // The middle needs 17.2 mm of preload; the adjuster gives at most 8 + 1.5 = 9.5 mm. On a linkage
+    // the wheel rate depends on where the end rides, so the figure is taken there (section 5g).
+    const linkage: LinkagePoint[] = [
+      [0, 0],
+      [40, 14],
+      [80, 31],
+      [125, 50],
+    ];
+    const rearRequest = roadRear({ linkage, adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 5, maxPosition: 6 } });
+    const rear = run(roadRequest({ front: undefined, rear: rearRequest })).rear!;
+    expect(rear.verdict).toBe('preload-out-of-range');
+    const massKg = (rear.loads.staticN + rear.loads.riderN) / g;
+    const hz = (wheelRateNmm: number) => Math.sqrt((wheelRateNmm * 1000) / massKg) / (2 * Math.PI);
+    const model = makeShockModel(rearRequest);
+    const set = model.wheelRateAt(makeSpringLaw(120), 9.5, rear.preload?.riderSagAfterMm as number);
+    const unreachable = model.wheelRateAt(makeSpringLaw(120), rear.preload?.neededMm as number, rear.target.aimRiderSagMm);
+    expect(rear.rideFrequencyHz.current).toBeCloseTo(hz(set), 9);
+    expect(Math.abs(hz(set) - hz(unreachable))).toBeGreaterThan(0.1);
   });
 
   it('calls a spring too soft or too stiff and names the ideal rate', () => {

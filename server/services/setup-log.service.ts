@@ -1,0 +1,133 @@
+/**
+ * A bike's setup log: every saved pass and every change the rider makes with a spanner, with the
+ * settings before and after. A change updates the bike's current values in the same transaction
+ * as its entry. The baseline is the settings before the first entry; back-to-baseline is the plan
+ * from the current settings back to it.
+ */
+import { ValidationError as YupValidationError } from 'yup';
+import { bikeSpecSchema } from '../../shared/schemas/bike.schema';
+import { toFieldErrors } from '../../shared/schemas/field-errors';
+import { planBackToBaseline } from '../../shared/setup/back-to-baseline';
+import { applySetupChange, diffSettings, settingsOf } from '../../shared/setup/settings';
+import type { GarageBike, SizingRecordSummary } from '../../shared/types/garage';
+import type { BackToBaseline, SetupChangeInput, SetupLog, SetupLogEntry as EntryView, SetupSettings } from '../../shared/types/setup-log';
+import { AppContext } from '../context';
+import { Bike } from '../entities/bike.entity';
+import { SetupLogEntry } from '../entities/setup-log-entry.entity';
+import { ValidationError } from '../errors';
+import { AuthUser } from '../middleware/auth';
+import { BikesService, findOwnedBike, specOf } from './bikes.service';
+import { summariesByIds } from './sizing-record-view';
+
+function toEntryView(row: SetupLogEntry, sizing: ReadonlyMap<number, SizingRecordSummary>): EntryView {
+  return {
+    id: row.id,
+    bikeId: row.bikeId,
+    kind: row.kind,
+    note: row.note,
+    createdAt: row.createdAt.toISOString(),
+    createdById: row.createdById,
+    before: row.before,
+    after: row.after,
+    changes: diffSettings(row.before, row.after),
+    sizing: row.sizingRecordId === null ? null : (sizing.get(row.sizingRecordId) ?? null),
+  };
+}
+
+/**
+ * The bike's messages under the change's paths: its spring fields are the change's `spring`; its
+ * preload is the new spring's when one was given, else what the adjuster setting made of it.
+ */
+function toChangePaths(fields: Record<string, string>, change: SetupChangeInput): Record<string, string> {
+  const mapped: Record<string, string> = {};
+  for (const [path, message] of Object.entries(fields)) {
+    const at = /^(front|rear)\.(rateNmm|secondRateNmm|breakMm|preloadMm|family)$/.exec(path);
+    if (!at) {
+      mapped[path] ??= message;
+      continue;
+    }
+    const end = at[1] as 'front' | 'rear';
+    const fromAdjuster = at[2] === 'preloadMm' && change[end]?.spring?.preloadMm === undefined;
+    mapped[fromAdjuster ? `${end}.preloadPosition` : `${end}.spring.${at[2]}`] ??= message;
+  }
+  return mapped;
+}
+
+export interface SetupChangeAnswer {
+  entry: EntryView;
+  bike: GarageBike;
+}
+
+export interface BaselineAnswer {
+  baseline: SetupSettings | null;
+  current: SetupSettings;
+  /** Null while the log is empty. */
+  plan: BackToBaseline | null;
+}
+
+export class SetupLogService {
+  private readonly bikes: BikesService;
+
+  constructor(private readonly ctx: Pick<AppContext, 'db' | 'now'>) {
+    this.bikes = new BikesService(ctx);
+  }
+
+  async list(user: AuthUser, bikeId: number): Promise<SetupLog> {
+    const read = this.ctx.db.read.manager;
+    const bike = await findOwnedBike(read, user, bikeId);
+    const rows = await read.find(SetupLogEntry, { where: { bikeId }, order: { id: 'ASC' } });
+    const sizing = await summariesByIds(
+      this.ctx.db,
+      rows.map((r) => r.sizingRecordId).filter((id): id is number => id !== null),
+    );
+    return {
+      entries: rows.map((row) => toEntryView(row, sizing)),
+      baseline: rows[0]?.before ?? null,
+      current: settingsOf(bike),
+    };
+  }
+
+  /** Records the change and puts it on the bike, both or neither. */
+  async change(user: AuthUser, bikeId: number, input: SetupChangeInput): Promise<SetupChangeAnswer> {
+    const entryId = await this.ctx.db.write(async (manager) => {
+      const bike = await findOwnedBike(manager, user, bikeId);
+      const outcome = applySetupChange(specOf(bike), input);
+      if (!outcome.ok) throw new ValidationError(outcome.fields);
+      try {
+        await bikeSpecSchema.validate(outcome.bike, { abortEarly: false });
+      } catch (err) {
+        if (err instanceof YupValidationError) throw new ValidationError(toChangePaths(toFieldErrors(err), input));
+        throw err;
+      }
+      const now = this.ctx.now();
+      await manager.save(Bike, { ...bike, ...outcome.bike, updatedAt: now });
+      const entry = await manager.save(
+        manager.create(SetupLogEntry, {
+          bikeId,
+          kind: 'change',
+          sizingRecordId: null,
+          createdById: user.id,
+          note: input.note ?? '',
+          before: settingsOf(bike),
+          after: settingsOf(outcome.bike),
+          createdAt: now,
+        }),
+      );
+      return entry.id;
+    });
+    const log = await this.list(user, bikeId);
+    const entry = log.entries.find((e) => e.id === entryId);
+    if (!entry) throw new Error(`setup log entry ${entryId} vanished after its write`);
+    return { entry, bike: await this.bikes.get(user, bikeId) };
+  }
+
+  async backToBaseline(user: AuthUser, bikeId: number): Promise<BaselineAnswer> {
+    const read = this.ctx.db.read.manager;
+    const bike = await findOwnedBike(read, user, bikeId);
+    const first = await read.findOne(SetupLogEntry, { select: { id: true, before: true }, where: { bikeId }, order: { id: 'ASC' } });
+    const current = settingsOf(bike);
+    if (!first) return { baseline: null, current, plan: null };
+    const plan = planBackToBaseline(first.before, current, { front: bike.front?.adjuster, rear: bike.rear?.adjuster });
+    return { baseline: first.before, current, plan };
+  }
+}

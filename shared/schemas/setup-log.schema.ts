@@ -1,0 +1,50 @@
+/**
+ * A change the rider reports in the setup log (POST /api/bikes/:id/setup-log): per end a new preload
+ * setting, new clicker positions, a spring swap. Whether the bike can take it (the adjuster's range,
+ * the clickers it has) is checked against the bike by `applySetupChange` (shared/setup/settings.ts).
+ */
+
+import { object, string } from 'yup';
+import { nullableNumberField, numberField, optionalNumberField } from './number-field';
+
+const springSwapSchema = object({
+  rateNmm: numberField('New spring rate', { min: 0, max: 500, aboveMin: true }, 'N/mm'),
+  family: string().trim().max(60, 'Spring family must be at most 60 characters.').optional(),
+  secondRateNmm: nullableNumberField('Second rate', { min: 0, max: 500, aboveMin: true }, 'N/mm'),
+  breakMm: nullableNumberField('Break point', { min: 0, max: 500, aboveMin: true }, 'mm'),
+  preloadMm: optionalNumberField('New spring preload', { min: 0, max: 100 }, 'mm'),
+})
+  .default(undefined)
+  .typeError('The new spring must be given as its rate (and family, preload).')
+  .test('dual-rate-pair', function (spring) {
+    if (!spring || (spring.secondRateNmm === null) === (spring.breakMm === null)) return true;
+    const missing = spring.secondRateNmm === null ? 'secondRateNmm' : 'breakMm';
+    return this.createError({
+      path: `${this.path}.${missing}`,
+      message: 'A dual-rate spring needs both its second rate and its break point.',
+    });
+  });
+
+function endChangeSchema(part: string) {
+  return object({
+    preloadPosition: optionalNumberField('Preload adjuster setting', { min: -1000, max: 1000 }, ''),
+    rebound: optionalNumberField('Rebound clicker', { min: 0, max: 100, integer: true }, 'clicks'),
+    compression: optionalNumberField('Compression clicker', { min: 0, max: 100, integer: true }, 'clicks'),
+    spring: springSwapSchema,
+  })
+    .default(undefined)
+    .typeError(`The ${part} change must be given as its new settings.`);
+}
+
+const hasChange = (end: Record<string, unknown> | undefined) => !!end && Object.values(end).some((v) => v !== undefined);
+
+export const setupChangeSchema = object({
+  note: string().trim().max(500, 'Keep the note to 500 characters.').default(''),
+  front: endChangeSchema('fork'),
+  rear: endChangeSchema('shock'),
+})
+  .typeError('Send the change as { front, rear, note }.')
+  .test('some-change', function (change) {
+  if (!change || hasChange(change.front) || hasChange(change.rear)) return true;
+  return this.createError({ path: '', message: 'Say what changed: a preload setting, a clicker or a spring, at the front or the rear.' });
+});

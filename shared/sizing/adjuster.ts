@@ -55,24 +55,30 @@ export function planAdjustments(
   const other = nearest > steps ? Math.floor(steps) : Math.ceil(steps);
   const [low, high] = findSettableBounds(adjuster, currentPreloadMm, resolution, rangeMm);
   const limitedByRange = neededPreloadMm < rangeMm.min - 1e-9 || neededPreloadMm > rangeMm.max + 1e-9;
-  const positions = [nearest, other].map((j) =>
-    roundToNano(Math.min(high, Math.max(low, adjuster.position + j * resolution))),
-  );
-  const distinct = positions[1] === positions[0] ? positions.slice(0, 1) : positions;
-  return distinct.map((position) => {
-    // Float noise from the multiply would otherwise show as 1.2500000000000002 turns.
-    const roundedChangeUnits = roundToNano(position - adjuster.position);
-    return {
-      changeMm,
-      changeUnits,
-      roundedChangeUnits,
-      roundedChangeMm: roundedChangeUnits * adjuster.mmPerUnit,
-      position,
-      limitedByRange,
-      direction: roundedChangeUnits > 0 ? 'add' : roundedChangeUnits < 0 ? 'remove' : 'none',
-      unit: UNIT_OF[adjuster.kind],
-    };
-  });
+  const nearestPosition = clampToNano(adjuster.position + nearest * resolution, low, high);
+  const otherPosition = clampToNano(adjuster.position + other * resolution, low, high);
+  const plans = [planAt(adjuster, nearestPosition, changeMm, changeUnits, limitedByRange)];
+  if (otherPosition !== nearestPosition) plans.push(planAt(adjuster, otherPosition, changeMm, changeUnits, limitedByRange));
+  return plans;
+}
+
+function planAt(adjuster: Adjuster, position: number, changeMm: number, changeUnits: number, limitedByRange: boolean): AdjusterPlan {
+  // Float noise from the multiply would otherwise show as 1.2500000000000002 turns.
+  const roundedChangeUnits = roundToNano(position - adjuster.position);
+  return {
+    changeMm,
+    changeUnits,
+    roundedChangeUnits,
+    roundedChangeMm: roundedChangeUnits * adjuster.mmPerUnit,
+    position,
+    limitedByRange,
+    direction: roundedChangeUnits > 0 ? 'add' : roundedChangeUnits < 0 ? 'remove' : 'none',
+    unit: UNIT_OF[adjuster.kind],
+  };
+}
+
+function clampToNano(position: number, low: number, high: number): number {
+  return roundToNano(Math.min(high, Math.max(low, position)));
 }
 
 /** Lowest and highest positions that may be set, the range's lower edge taken up onto the grid unless it is the stop. */

@@ -36,18 +36,27 @@ export function chooseRoundedSetting(
   windows: SagWindows | null,
 ): RoundedSetting {
   const { adjuster, currentPreloadMm, resolution, rangeMm } = setting;
-  const settle = (plan: AdjusterPlan): RoundedSetting => {
-    const preloadMm = currentPreloadMm + plan.roundedChangeMm;
-    const riderSagMm = model.sagAtLoad(spring, preloadMm, loads.staticN + loads.riderN);
-    const staticSagMm = model.sagAtLoad(spring, preloadMm, loads.staticN);
-    const insideWindows = windows
-      ? isInsideWindow(riderSagMm, windows.riderSagMm) && isInsideWindow(staticSagMm, windows.staticSagMm)
-      : null;
-    return { plan, preloadMm, riderSagMm, staticSagMm, insideWindows };
-  };
   const [nearestPlan, otherPlan] = planAdjustments(adjuster, currentPreloadMm, neededPreloadMm, resolution, rangeMm);
-  const nearest = settle(nearestPlan);
+  const nearest = settle(model, spring, loads, currentPreloadMm, windows, nearestPlan);
   if (nearest.insideWindows !== false || !otherPlan) return nearest;
-  const other = settle(otherPlan);
+  const other = settle(model, spring, loads, currentPreloadMm, windows, otherPlan);
   return other.insideWindows ? other : nearest;
+}
+
+// A module-level function rather than a closure: this runs for every candidate spring.
+function settle(
+  model: EndModel,
+  spring: SpringLaw,
+  loads: LoadsN,
+  currentPreloadMm: number,
+  windows: SagWindows | null,
+  plan: AdjusterPlan,
+): RoundedSetting {
+  const preloadMm = currentPreloadMm + plan.roundedChangeMm;
+  const riderSagMm = model.sagAtLoad(spring, preloadMm, loads.staticN + loads.riderN);
+  const staticSagMm = model.sagAtLoad(spring, preloadMm, loads.staticN);
+  const insideWindows = windows
+    ? isInsideWindow(riderSagMm, windows.riderSagMm) && isInsideWindow(staticSagMm, windows.staticSagMm)
+    : null;
+  return { plan, preloadMm, riderSagMm, staticSagMm, insideWindows };
 }

@@ -45,6 +45,12 @@ describe('the API surface', () => {
     expect(res.headers['x-powered-by']).toBeUndefined();
   });
 
+  test('CORS lets the Expo dev server in, with credentials for the refresh cookie', async () => {
+    const res = await request(t.app).get('/api/health').set('Origin', 'http://localhost:8081');
+    expect(res.headers['access-control-allow-origin']).toBe('http://localhost:8081');
+    expect(res.headers['access-control-allow-credentials']).toBe('true');
+  });
+
   test('CORS is closed to an origin that is not listed', async () => {
     const res = await request(t.app).get('/api/health').set('Origin', 'http://elsewhere.test');
     expect(res.headers['access-control-allow-origin']).toBeUndefined();

@@ -11,6 +11,7 @@ import { AppContext } from './context';
 import { authGuards } from './middleware/auth';
 import { apiErrorHandler, apiNotFound } from './middleware/error-handler';
 import { apiRoutes } from './routes';
+import { PAYMENT_WEBHOOK_PATH } from './routes/payments.router';
 import { mountRoutes } from './routes/route-table';
 
 export const JSON_BODY_LIMIT = '100kb';
@@ -46,6 +47,8 @@ export function createApp(ctx: AppContext): Express {
 
   const api = express.Router();
   api.use(cors({ origin: ctx.config.corsOrigins, credentials: true }));
+  // The payment webhook's signature covers the raw bytes: parsed before (and so skipped by) the JSON parser.
+  api.use(PAYMENT_WEBHOOK_PATH, express.raw({ type: '*/*', limit: JSON_BODY_LIMIT }));
   api.use(express.json({ limit: JSON_BODY_LIMIT }));
   api.use(cookieParser());
   api.use(mountRoutes(apiRoutes(ctx), authGuards(ctx)));

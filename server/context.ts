@@ -4,6 +4,7 @@ import { ServerConfig } from './env';
 import { SmtpOutbox } from './fakes/smtp-outbox';
 import { loadJwtSecret } from './services/jwt-secret.service';
 import { createMailer, Mailer } from './services/mailer.service';
+import { openPaymentGateway, PaymentGateway } from './services/payments.service';
 import { SizingDataCache } from './services/sizing-data.service';
 
 /** What every router and service is built from; tests assemble their own. */
@@ -17,6 +18,8 @@ export interface AppContext {
   mailer: Mailer;
   /** Profiles, settings and candidate springs the sizing reads, cached until a write invalidates them. */
   sizingData: SizingDataCache;
+  /** The card payment provider's SDK, pointed at the local stand-in outside production without keys. */
+  payments: PaymentGateway;
   /** The local SMTP stand-in, when this installation runs one (never in production). */
   outbox?: SmtpOutbox;
 }
@@ -35,10 +38,12 @@ export async function openContext(config: ServerConfig, log: AppContext['log'], 
   const secrets = { jwt: loadJwtSecret(config) };
   const outbox = config.smtp || config.production ? undefined : await SmtpOutbox.start(path.join(config.dataDir, 'outbox'), log);
   const mailer = createMailer(config.smtp ?? outbox?.smtp, config.mailFrom);
+  const payments = await openPaymentGateway(config, log);
   return {
-    ctx: { config, db, log, now, secrets, mailer, outbox, sizingData: new SizingDataCache(db) },
+    ctx: { config, db, log, now, secrets, mailer, outbox, payments, sizingData: new SizingDataCache(db) },
     close: async () => {
       mailer.close();
+      await payments.close();
       await outbox?.close();
       await db.close();
     },

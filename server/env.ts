@@ -31,6 +31,11 @@ export type SmtpSettings =
   | { url: string }
   | { host: string; port: number; secure: boolean; user?: string; pass?: string };
 
+export interface PaymentKeys {
+  secretKey: string;
+  webhookSecret: string;
+}
+
 export interface ServerConfig {
   port: number;
   dataDir: string;
@@ -47,6 +52,8 @@ export interface ServerConfig {
   /** Outgoing mail; without it, outside production, a local stand-in keeps every mail in the data folder. */
   smtp?: SmtpSettings;
   mailFrom: string;
+  /** The card payment provider's keys; without them, outside production, a local stand-in with generated test keys. */
+  payments?: PaymentKeys;
   rateLimits: RateLimits;
   /**
    * Marks the refresh cookie Secure. On by default only when the public address is https: a
@@ -94,6 +101,14 @@ function readSmtp(env: Record<string, string | undefined>): SmtpSettings | undef
   };
 }
 
+function readPaymentKeys(env: Record<string, string | undefined>): PaymentKeys | undefined {
+  const secretKey = env.STRIPE_SECRET_KEY || undefined;
+  const webhookSecret = env.STRIPE_WEBHOOK_SECRET || undefined;
+  if (!secretKey && !webhookSecret) return undefined;
+  if (!secretKey || !webhookSecret) throw new Error('Set both STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET, or neither');
+  return { secretKey, webhookSecret };
+}
+
 export function readConfig(env: Record<string, string | undefined> = process.env): ServerConfig {
   const production = env.NODE_ENV === 'production';
   const publicUrl = readPublicUrl(env.SAGWRIGHT_PUBLIC_URL);
@@ -111,6 +126,7 @@ export function readConfig(env: Record<string, string | undefined> = process.env
     publicUrl,
     smtp: readSmtp(env),
     mailFrom: env.SAGWRIGHT_MAIL_FROM || 'Sagwright <no-reply@sagwright.invalid>',
+    payments: readPaymentKeys(env),
     rateLimits: DEFAULT_RATE_LIMITS,
     secureCookies: env.SAGWRIGHT_SECURE_COOKIES ? env.SAGWRIGHT_SECURE_COOKIES === '1' : publicUrl?.startsWith('https:') === true,
   };

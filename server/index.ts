@@ -19,6 +19,7 @@ async function main() {
   const server = createApp(ctx).listen(config.port, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
+    ctx.payments.standIn?.setWebhookUrl(`http://127.0.0.1:${port}/api/payments/webhook`);
     console.log(`Sagwright is running at http://localhost:${port}`);
     if (config.seedDemo) {
       console.log(`Demo accounts, password "${DEMO_PASSWORD}":`);

@@ -14,5 +14,11 @@ import { StockMovement } from './stock-movement.entity';
 import { ImportBatch } from './import-batch.entity';
 import { TargetProfile } from './target-profile.entity';
 import { User } from './user.entity';
+import { ShopSettings } from './shop-settings.entity';
+import { Quote } from './quote.entity';
+import { QuoteLine } from './quote-line.entity';
+import { QuoteStatusEvent } from './quote-status-event.entity';
+import { Payment } from './payment.entity';
+import { PaymentWebhookEvent } from './payment-webhook-event.entity';
 
-export const entities = [Shop, SeedRecord, SpringRate, TargetProfile, EngineSetting, User, PasswordReset, StockMovement, ImportBatch, BikeModel, Bike, RiderProfile, MeasuringDraft, SizingRecord, SetupLogEntry, AuditEntry];
+export const entities = [Shop, SeedRecord, SpringRate, TargetProfile, EngineSetting, User, PasswordReset, StockMovement, ImportBatch, BikeModel, Bike, RiderProfile, MeasuringDraft, SizingRecord, SetupLogEntry, AuditEntry, ShopSettings, Quote, QuoteLine, QuoteStatusEvent, Payment, PaymentWebhookEvent];

@@ -2,7 +2,9 @@
 import { Request, RequestHandler } from 'express';
 import { Role } from '../../shared/types/roles';
 import { AppContext } from '../context';
-import { ForbiddenError, UnauthorizedError } from '../errors';
+import { Quote } from '../entities/quote.entity';
+import { BadRequestError, ForbiddenError, HttpError, UnauthorizedError } from '../errors';
+import { hashQuoteToken } from '../services/quote-token';
 import { Guards } from '../routes/route-table';
 import { SessionService } from '../services/session.service';
 
@@ -37,10 +39,37 @@ export function currentUser(req: Request): AuthUser {
   return req.user;
 }
 
+const DEAD_LINK = 'This quote link is not valid any more: ask the shop for a new one.';
+
+/**
+ * Opens the one quote whose link token is the path's `:token` (only its SHA-256 is stored), and
+ * leaves its id in `res.locals.quoteId`. A superseded or expired quote's link is dead.
+ */
+export function requireQuoteToken(ctx: AppContext): RequestHandler {
+  return async (req, res, next) => {
+    const token = typeof req.params.token === 'string' ? req.params.token : '';
+    const quote = /^[A-Za-z0-9_-]{43}$/.test(token)
+      ? await ctx.db.read.getRepository(Quote).findOne({ select: { id: true, status: true, validUntil: true }, where: { tokenHash: hashQuoteToken(token) } })
+      : null;
+    const lapsed = quote && ['draft', 'sent', 'accepted'].includes(quote.status) && quote.validUntil.getTime() < ctx.now().getTime();
+    if (!quote || lapsed || quote.status === 'superseded' || quote.status === 'expired') throw new HttpError(404, 'quote-link', DEAD_LINK);
+    res.locals.quoteId = quote.id;
+    next();
+  };
+}
+
+/** The provider signs every event; one without the header is refused before its body is read. */
+export const requireSignatureHeader: RequestHandler = (req, _res, next) => {
+  if (!req.get('stripe-signature')) throw new BadRequestError('The event is not signed.', 'bad-signature');
+  next();
+};
+
 export function authGuards(ctx: AppContext): Guards {
   const sessions = new SessionService(ctx);
   return {
     public: () => [],
     'signed-in': (access) => [requireUser(sessions, access.roles)],
+    'quote-token': () => [requireQuoteToken(ctx)],
+    webhook: () => [requireSignatureHeader],
   };
 }

@@ -3,6 +3,7 @@ import { CreateSizingData1764633700000 } from './1764633700000-create-sizing-dat
 import { CreateAccounts1764633800000 } from './1764633800000-create-accounts';
 import { CatalogueAndStock1764634000000 } from './1764634000000-catalogue-and-stock';
 import { RiderFlow1764634100000 } from './1764634100000-rider-flow';
+import { ServiceDesk1764634200000 } from './1764634200000-service-desk';
 
 /** Every migration in the order it runs; a new one is appended here. */
-export const migrations = [CreateShop1764633600000, CreateSizingData1764633700000, CreateAccounts1764633800000, CatalogueAndStock1764634000000, RiderFlow1764634100000];
+export const migrations = [CreateShop1764633600000, CreateSizingData1764633700000, CreateAccounts1764633800000, CatalogueAndStock1764634000000, RiderFlow1764634100000, ServiceDesk1764634200000];

@@ -15,8 +15,13 @@ import { RouteSpec } from './route-table';
 import { sizingRoutes } from './sizing.router';
 import { stockRoutes } from './stock.router';
 import { userRoutes } from './users.router';
+import { customerQuoteRoutes } from './customer-quote.router';
+import { customerRoutes } from './customers.router';
+import { paymentRoutes } from './payments.router';
+import { quoteRoutes } from './quotes.router';
+import { shopSettingsRoutes } from './shop-settings.router';
 
 /** The whole API, in one table. */
 export function apiRoutes(ctx: AppContext): RouteSpec[] {
-  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...shopDataRoutes(ctx)];
+  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...shopDataRoutes(ctx), ...shopSettingsRoutes(ctx), ...customerRoutes(ctx), ...quoteRoutes(ctx), ...customerQuoteRoutes(ctx), ...paymentRoutes(ctx)];
 }

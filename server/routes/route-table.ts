@@ -11,7 +11,13 @@ export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
  * Who may call a route. Each kind has its guard in `Guards`, so a new kind (a customer's quote
  * link, a payment webhook) cannot be declared without saying how it is checked.
  */
-export type Access = { kind: 'public' } | { kind: 'signed-in'; roles: readonly Role[] };
+export type Access =
+  | { kind: 'public' }
+  | { kind: 'signed-in'; roles: readonly Role[] }
+  /** The customer's quote link: the `:token` of the path opens that one quote and nothing else. */
+  | { kind: 'quote-token' }
+  /** The payment provider's signed events; the handler verifies the signature over the raw body. */
+  | { kind: 'webhook' };
 
 export interface RouteSpec {
   method: Method;
@@ -24,6 +30,10 @@ export interface RouteSpec {
 }
 
 export const publicAccess: Access = { kind: 'public' };
+
+export const quoteTokenAccess: Access = { kind: 'quote-token' };
+
+export const webhookAccess: Access = { kind: 'webhook' };
 
 /** Any signed-in account, whatever its role. */
 export const anyRole: Access = { kind: 'signed-in', roles: ROLES };

@@ -8,6 +8,7 @@ import { Database } from '../data-source';
 import { SeedRecord } from '../entities/seed-record.entity';
 import { seedDemoAccounts } from './demo-accounts';
 import { seedDemoBikeModels } from './demo-bike-models';
+import { seedDemoShopSettings } from './demo-shop-settings';
 import { seedDemoCatalogue } from './demo-catalogue';
 import { seedDemoWorkshop } from './demo-workshop';
 import { seedSizingDefaults } from './sizing-baseline';
@@ -24,6 +25,7 @@ const demoParts: SeedPart[] = [
   { name: 'demo-catalogue', run: seedDemoCatalogue },
   { name: 'demo-accounts', run: seedDemoAccounts },
   { name: 'demo-bike-models', run: seedDemoBikeModels },
+  { name: 'demo-shop-settings', run: seedDemoShopSettings },
 ];
 
 /** Returns the names of the parts loaded by this call. */

@@ -13,8 +13,12 @@ import { makeTestContext, TestContext } from '../test-context';
 import { bearer, createAccount, RAISED_LIMITS } from './helpers';
 import { prepareCatalogueFixtures } from '../catalogue/helpers';
 import { makeRiderFlowFixtures } from '../rider/helpers';
+import { makeDeskFixtures } from '../desk/helpers';
 
-type Expected = 'public' | readonly Role[];
+type Expected = 'public' | 'quote-token' | 'webhook' | readonly Role[];
+
+/** A well-formed quote link token that opens nothing. */
+const UNKNOWN_QUOTE_TOKEN = 'A'.repeat(43);
 
 const everyone = ROLES;
 
@@ -86,6 +90,28 @@ const expectations: Record<string, Expected> = {
   'GET /engine-settings': ['admin'],
   'PATCH /engine-settings': ['admin'],
   'GET /audit': ['admin'],
+  'GET /shop-settings': ['desk', 'admin'],
+  'PUT /shop-settings': ['admin'],
+  'GET /customers': ['desk', 'admin'],
+  'POST /customers': ['desk', 'admin'],
+  'GET /quotes': everyone,
+  'POST /quotes': ['desk', 'admin'],
+  'GET /quotes/:id': everyone,
+  'GET /quotes/:id/spring-options': ['desk', 'admin'],
+  'PUT /quotes/:id/lines': ['desk', 'admin'],
+  'POST /quotes/:id/send': ['desk', 'admin'],
+  'POST /quotes/:id/revise': ['desk', 'admin'],
+  'POST /quotes/:id/book': ['desk', 'admin'],
+  'POST /quotes/:id/fitted': ['desk', 'admin'],
+  'POST /quotes/:id/cancel': ['desk', 'admin'],
+  'POST /quotes/:id/accept': everyone,
+  'POST /quotes/:id/decline': everyone,
+  'POST /quotes/:id/pay-deposit': everyone,
+  'GET /customer-quotes/:token': 'quote-token',
+  'POST /customer-quotes/:token/accept': 'quote-token',
+  'POST /customer-quotes/:token/decline': 'quote-token',
+  'POST /customer-quotes/:token/pay-deposit': 'quote-token',
+  'POST /payments/webhook': 'webhook',
 };
 
 const key = (route: RouteSpec) => `${route.method.toUpperCase()} ${route.path}`;
@@ -107,6 +133,7 @@ beforeAll(async () => {
   const target = String(accounts.rider.id);
   const catalogue = await prepareCatalogueFixtures(t, accounts.counter.id);
   const flow = await makeRiderFlowFixtures(t, accounts.rider, accounts.admin);
+  const desk = await makeDeskFixtures(t, accounts.desk, flow.recordId);
   params = {
     'PATCH /users/:id/role': { id: target },
     'PATCH /users/:id/active': { id: target },
@@ -138,6 +165,21 @@ beforeAll(async () => {
     'POST /bikes/:id/setup-log': { id: flow.bikeId },
     'GET /bikes/:id/setup-log/back-to-baseline': { id: flow.bikeId },
     'PUT /target-profiles/:discipline': { discipline: 'road' },
+    'GET /quotes/:id': { id: desk.quoteId },
+    'GET /quotes/:id/spring-options': { id: desk.quoteId },
+    'PUT /quotes/:id/lines': { id: desk.quoteId },
+    'POST /quotes/:id/send': { id: desk.quoteId },
+    'POST /quotes/:id/revise': { id: desk.quoteId },
+    'POST /quotes/:id/book': { id: desk.quoteId },
+    'POST /quotes/:id/fitted': { id: desk.quoteId },
+    'POST /quotes/:id/cancel': { id: desk.quoteId },
+    'POST /quotes/:id/accept': { id: desk.quoteId },
+    'POST /quotes/:id/decline': { id: desk.quoteId },
+    'POST /quotes/:id/pay-deposit': { id: desk.quoteId },
+    'GET /customer-quotes/:token': { token: UNKNOWN_QUOTE_TOKEN },
+    'POST /customer-quotes/:token/accept': { token: UNKNOWN_QUOTE_TOKEN },
+    'POST /customer-quotes/:token/decline': { token: UNKNOWN_QUOTE_TOKEN },
+    'POST /customer-quotes/:token/pay-deposit': { token: UNKNOWN_QUOTE_TOKEN },
   };
   routes = apiRoutes(t);
 });
@@ -179,7 +221,13 @@ test('each route answers each caller as its access class says', async () => {
     for (const as of ['anonymous', ...ROLES] as const) {
       const res = await call(route, as);
       const label = `${key(route)} as ${as}: ${res.status} ${res.body.error?.code ?? ''}`;
-      if (expected === 'public') {
+      if (expected === 'quote-token') {
+        // Without a link that opens a quote, anyone, signed in or not, gets the dead-link answer.
+        if (res.status !== 404 || res.body.error?.code !== 'quote-link') wrong.push(`${label}, expected 404 quote-link`);
+      } else if (expected === 'webhook') {
+        // Without the provider's signature, anyone gets a 400 before the body is read.
+        if (res.status !== 400 || res.body.error?.code !== 'bad-signature') wrong.push(`${label}, expected 400 bad-signature`);
+      } else if (expected === 'public') {
         if (refusedByGuard(res)) wrong.push(`${label}, expected the guard to let it through`);
       } else if (as === 'anonymous') {
         if (res.status !== 401) wrong.push(`${label}, expected 401`);

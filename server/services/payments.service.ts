@@ -1,0 +1,153 @@
+/**
+ * Card deposits through the payment provider's SDK. With the provider's keys (STRIPE_SECRET_KEY,
+ * STRIPE_WEBHOOK_SECRET) the SDK talks to the provider; outside production without them it talks
+ * to the local stand-in (server/fakes/payment-service.ts) with generated test keys. A deposit is
+ * recorded once per payment intent, whether the pay route or the signed webhook sees it first;
+ * webhook events are also kept by id, so a repeated delivery changes nothing.
+ */
+import Stripe from 'stripe';
+import { EntityManager } from 'typeorm';
+import type { QuoteView, ReceiptView } from '../../shared/types/quote';
+import { AppContext } from '../context';
+import { ServerConfig } from '../env';
+import { PaymentStandIn } from '../fakes/payment-service';
+import { Payment } from '../entities/payment.entity';
+import { PaymentWebhookEvent } from '../entities/payment-webhook-event.entity';
+import { Quote } from '../entities/quote.entity';
+import { BadRequestError, ConflictError, HttpError, NotFoundError } from '../errors';
+import { AuthUser } from '../middleware/auth';
+import { assertOwnerOrStaff } from '../middleware/ownership';
+import { moveQuote, QuoteActor } from './quote-rules';
+import { toQuoteView, toReceipt } from './quote-view';
+
+type Intent = Stripe.PaymentIntent;
+
+export class PaymentGateway {
+  private constructor(
+    readonly client: Stripe | null,
+    readonly webhookSecret: string | null,
+    /** Test keys (or the stand-in): the shop's own test card form may post a test payment method. */
+    readonly testMode: boolean,
+    readonly standIn: PaymentStandIn | undefined,
+  ) {}
+
+  static async open(config: ServerConfig, log: AppContext['log']): Promise<PaymentGateway> {
+    if (config.payments) {
+      const client = new Stripe(config.payments.secretKey, { maxNetworkRetries: 1 });
+      return new PaymentGateway(client, config.payments.webhookSecret, config.payments.secretKey.startsWith('sk_test_'), undefined);
+    }
+    if (config.production) return new PaymentGateway(null, null, false, undefined);
+    const standIn = await PaymentStandIn.start(log);
+    const client = new Stripe(standIn.secretKey, { host: '127.0.0.1', port: standIn.port, protocol: 'http', maxNetworkRetries: 0 });
+    return new PaymentGateway(client, standIn.webhookSecret, true, standIn);
+  }
+
+  sdk(): Stripe {
+    if (!this.client) throw new ConflictError('Card payments are not set up on this installation; pay the deposit at the shop.', 'payments-off');
+    return this.client;
+  }
+
+  async refundDeposit(manager: EntityManager, quote: Quote, amountCents: number, at: Date): Promise<void> {
+    const deposit = await manager.findOneBy(Payment, { quoteId: quote.id, kind: 'deposit' });
+    if (!deposit) return;
+    const refund = await this.sdk().refunds.create({ payment_intent: deposit.providerId, amount: amountCents });
+    await manager.insert(Payment, { quoteId: quote.id, kind: 'refund', providerId: refund.id, amountCents, currency: quote.currency, method: deposit.method, last4: deposit.last4, at });
+    await manager.update(Quote, { id: quote.id }, { refundedCents: quote.refundedCents + amountCents });
+    quote.refundedCents += amountCents;
+  }
+
+  close(): Promise<void> {
+    return this.standIn?.close() ?? Promise.resolve();
+  }
+}
+
+export function openPaymentGateway(config: ServerConfig, log: AppContext['log']): Promise<PaymentGateway> {
+  return PaymentGateway.open(config, log);
+}
+
+function cardDetails(intent: Intent): { method: string; last4: string | null } {
+  const charge = typeof intent.latest_charge === 'object' ? intent.latest_charge : null;
+  const card = charge?.payment_method_details?.card;
+  return { method: charge?.payment_method_details?.type ?? 'card', last4: card?.last4 ?? null };
+}
+
+export interface DepositAnswer {
+  quote: QuoteView;
+  receipt: ReceiptView;
+}
+
+export class PaymentsService {
+  constructor(private readonly ctx: Pick<AppContext, 'db' | 'now' | 'payments'>) {}
+
+  /**
+   * Charges the deposit with a test payment method from the shop's test card form. A decline
+   * answers 402 with the reason and leaves the quote accepted and unpaid.
+   */
+  async payDeposit(actor: QuoteActor, quoteId: number, paymentMethod: string, owner?: AuthUser): Promise<DepositAnswer> {
+    const gateway = this.ctx.payments;
+    const quote = await this.ctx.db.read.getRepository(Quote).findOneBy({ id: quoteId });
+    if (!quote) throw new NotFoundError('There is no such quote.');
+    if (owner) assertOwnerOrStaff(owner, quote.riderId);
+    const sdk = gateway.sdk();
+    if (!gateway.testMode) throw new ConflictError('This card form takes test cards only; pay the deposit at the shop.', 'test-mode-only');
+    if (quote.paidCents > 0) throw new ConflictError(`The deposit for quote ${quote.number} is already paid.`, 'already-paid');
+    if (quote.status !== 'accepted') throw new ConflictError(`Quote ${quote.number} must be accepted before its deposit is paid.`, 'bad-status');
+    if (quote.depositDueCents <= 0) throw new ConflictError(`Quote ${quote.number} needs no deposit.`, 'no-deposit');
+    let intent: Intent;
+    try {
+      const created = await sdk.paymentIntents.create(
+        { amount: quote.depositDueCents, currency: quote.currency.toLowerCase(), payment_method: paymentMethod, metadata: { quoteId: String(quote.id), quoteNumber: quote.number } },
+      );
+      intent = await sdk.paymentIntents.confirm(created.id, { payment_method: paymentMethod, expand: ['latest_charge'] });
+    } catch (err) {
+      if (err instanceof Stripe.errors.StripeCardError) {
+        throw new HttpError(402, 'card-declined', `The card was declined (${err.message.replace(/\.$/, '')}). The deposit is still due: try another card.`);
+      }
+      if (err instanceof Stripe.errors.StripeInvalidRequestError && err.param === 'payment_method') {
+        throw new BadRequestError('That card is not one the test card form knows.', 'bad-payment-method');
+      }
+      throw err;
+    }
+    if (intent.status !== 'succeeded') throw new HttpError(402, 'card-not-charged', 'The card was not charged; the deposit is still due.');
+    const payment = await this.ctx.db.write((manager) => recordDeposit(manager, intent, { kind: 'payment', id: actor.id, name: actor.name }, this.ctx.now()));
+    const read = this.ctx.db.read.manager;
+    return { quote: await toQuoteView(read, await read.findOneByOrFail(Quote, { id: quoteId })), receipt: toReceipt(payment) };
+  }
+
+  /** A signed event from the provider; a bad signature is a 400 and changes nothing. */
+  async handleWebhook(rawBody: Buffer | undefined, signature: string | undefined): Promise<{ received: true; duplicate: boolean }> {
+    const gateway = this.ctx.payments;
+    if (!gateway.client || !gateway.webhookSecret) throw new BadRequestError('Payments are not set up.', 'payments-off');
+    if (!Buffer.isBuffer(rawBody) || !signature) throw new BadRequestError('The event is not signed.', 'bad-signature');
+    let event: Stripe.Event;
+    try {
+      event = gateway.client.webhooks.constructEvent(rawBody, signature, gateway.webhookSecret);
+    } catch {
+      throw new BadRequestError('The event signature does not match.', 'bad-signature');
+    }
+    return this.ctx.db.write(async (manager) => {
+      if (await manager.existsBy(PaymentWebhookEvent, { eventId: event.id })) return { received: true as const, duplicate: true };
+      await manager.insert(PaymentWebhookEvent, { eventId: event.id, type: event.type, receivedAt: this.ctx.now() });
+      if (event.type === 'payment_intent.succeeded') {
+        await recordDeposit(manager, event.data.object, { kind: 'payment', id: null, name: 'Card payment' }, this.ctx.now());
+      }
+      return { received: true as const, duplicate: false };
+    });
+  }
+}
+
+/** Records a succeeded intent as the quote's deposit, once: a second call for the same intent returns the first row. */
+async function recordDeposit(manager: EntityManager, intent: Intent, actor: QuoteActor, at: Date): Promise<Payment> {
+  const existing = await manager.findOneBy(Payment, { providerId: intent.id });
+  if (existing) return existing;
+  const quoteId = Number(intent.metadata?.quoteId);
+  const quote = await manager.findOneBy(Quote, { id: quoteId });
+  if (!quote) throw new BadRequestError('The payment names no quote of this shop.', 'unknown-quote');
+  const { method, last4 } = cardDetails(intent);
+  const payment = await manager.save(
+    manager.create(Payment, { quoteId, kind: 'deposit', providerId: intent.id, amountCents: intent.amount, currency: quote.currency, method, last4, at }),
+  );
+  await manager.update(Quote, { id: quoteId }, { paidCents: quote.paidCents + intent.amount });
+  if (quote.status === 'accepted') await moveQuote(manager, quote, 'deposit-paid', actor, at, 'paid', `Deposit ${intent.amount} cents, ${intent.id}`);
+  return payment;
+}

@@ -1,0 +1,72 @@
+/**
+ * The quote's status flow. A status changes only through `moveQuote`, which checks the move is
+ * allowed and records who made it and when in quote_status_event, in the caller's transaction.
+ *
+ *   draft ─send─▶ sent ─accept─▶ accepted ─pay─▶ deposit-paid ─book─▶ booked ─fit─▶ fitted
+ *            sent ─decline─▶ declined      accepted ─book (no deposit due)─▶ booked
+ *            sent/declined/expired ─revise─▶ superseded (a new draft, version + 1)
+ *   draft, sent, accepted, deposit-paid, booked ─cancel─▶ cancelled (stock released, deposit refunded)
+ *   draft, sent, accepted past the validity date ─▶ expired (stock released)
+ */
+import { EntityManager } from 'typeorm';
+import type { QuoteStatus, QuoteStatusEventView } from '../../shared/types/quote';
+import { Quote } from '../entities/quote.entity';
+import { QuoteStatusEvent } from '../entities/quote-status-event.entity';
+import { ConflictError } from '../errors';
+
+export type QuoteActor = QuoteStatusEventView['actor'];
+
+export const SYSTEM_ACTOR: QuoteActor = { kind: 'system', id: null, name: 'Sagwright' };
+
+const MOVES: Record<QuoteStatus, readonly QuoteStatus[]> = {
+  draft: ['sent', 'cancelled', 'expired'],
+  sent: ['sent', 'accepted', 'declined', 'superseded', 'cancelled', 'expired'],
+  accepted: ['deposit-paid', 'booked', 'cancelled', 'expired'],
+  declined: ['superseded'],
+  'deposit-paid': ['booked', 'cancelled'],
+  booked: ['booked', 'fitted', 'cancelled'],
+  fitted: [],
+  cancelled: [],
+  expired: ['superseded'],
+  superseded: [],
+};
+
+/** Statuses whose springs are held on the shelf for the quote. */
+export const HOLDS_STOCK: readonly QuoteStatus[] = ['accepted', 'deposit-paid', 'booked'];
+
+/** Statuses that lapse when the validity date passes: nothing has been paid yet. */
+export const EXPIRES: readonly QuoteStatus[] = ['draft', 'sent', 'accepted'];
+
+const LABEL: Record<QuoteStatus, string> = {
+  draft: 'a draft',
+  sent: 'sent',
+  accepted: 'accepted',
+  declined: 'declined',
+  'deposit-paid': 'paid (deposit)',
+  booked: 'booked',
+  fitted: 'fitted',
+  cancelled: 'cancelled',
+  expired: 'expired',
+  superseded: 'replaced by a newer version',
+};
+
+export function canMove(from: QuoteStatus, to: QuoteStatus): boolean {
+  return MOVES[from].includes(to);
+}
+
+export function assertCanMove(quote: Pick<Quote, 'status' | 'number'>, to: QuoteStatus, action: string): void {
+  if (!canMove(quote.status, to)) {
+    throw new ConflictError(`Quote ${quote.number} is ${LABEL[quote.status]}: it cannot be ${action} now.`, 'bad-status');
+  }
+}
+
+export async function moveQuote(manager: EntityManager, quote: Quote, to: QuoteStatus, actor: QuoteActor, at: Date, action: string, note = ''): Promise<Quote> {
+  assertCanMove(quote, to, action);
+  const from = quote.status;
+  const changed = await manager.update(Quote, { id: quote.id, status: from }, { status: to, updatedAt: at });
+  if (changed.affected !== 1) throw new ConflictError(`Quote ${quote.number} changed meanwhile; reload it and try again.`, 'quote-changed');
+  await manager.insert(QuoteStatusEvent, { quoteId: quote.id, fromStatus: from, toStatus: to, actorKind: actor.kind, actorId: actor.id, actorName: actor.name, note, at });
+  quote.status = to;
+  quote.updatedAt = at;
+  return quote;
+}

@@ -1,0 +1,67 @@
+/** The shop's terms for quotes: one row, read by every quote built, edited by the admin. */
+import { EntityManager } from 'typeorm';
+import type { ShopSettingsInput } from '../../shared/schemas/shop-settings.schema';
+import type { ShopIdentity, ShopSettingsView } from '../../shared/types/quote';
+import { AppContext } from '../context';
+import { Shop } from '../entities/shop.entity';
+import { ShopSettings } from '../entities/shop-settings.entity';
+import { ConflictError } from '../errors';
+import { AuthUser } from '../middleware/auth';
+
+const SETTINGS_ID = 1;
+
+export function toShopSettingsView(row: ShopSettings): ShopSettingsView {
+  return {
+    labourRateCentsPerHour: row.labourRateCentsPerHour,
+    taxBasisPoints: row.taxBasisPoints,
+    deposit: row.deposit,
+    operations: row.operations,
+    quoteValidityDays: row.quoteValidityDays,
+    cautions: row.cautions,
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+/** The settings a quote is built with; a shop that has none set cannot quote yet. */
+export async function loadShopSettings(manager: EntityManager): Promise<ShopSettings> {
+  const row = await manager.findOneBy(ShopSettings, { id: SETTINGS_ID });
+  if (!row) throw new ConflictError('The shop has no labour rate, tax rate or deposit rule yet: an admin sets them under shop settings.', 'no-shop-settings');
+  return row;
+}
+
+export async function loadShop(manager: EntityManager): Promise<{ identity: ShopIdentity; currency: string }> {
+  const shop = await manager.findOne(Shop, { where: {}, order: { id: 'ASC' } });
+  if (!shop) throw new ConflictError("The shop's name and currency are not set up yet.", 'no-shop');
+  return { identity: { name: shop.name, address: shop.address, email: shop.email, phone: shop.phone }, currency: shop.currency };
+}
+
+export async function writeShopSettings(manager: EntityManager, input: ShopSettingsInput, updatedById: number | null, now: Date): Promise<ShopSettings> {
+  const deposit = input.deposit.kind === 'percent' ? { kind: 'percent' as const, basisPoints: input.deposit.basisPoints! } : { kind: 'fixed' as const, cents: input.deposit.cents! };
+  return manager.save(
+    manager.create(ShopSettings, {
+      id: SETTINGS_ID,
+      labourRateCentsPerHour: input.labourRateCentsPerHour,
+      taxBasisPoints: input.taxBasisPoints,
+      deposit,
+      operations: input.operations.map((o) => ({ code: o.code, label: o.label, minutes: o.minutes })),
+      quoteValidityDays: input.quoteValidityDays,
+      cautions: input.cautions,
+      updatedById,
+      updatedAt: now,
+    }),
+  );
+}
+
+export class ShopSettingsService {
+  constructor(private readonly ctx: Pick<AppContext, 'db' | 'now'>) {}
+
+  async get(): Promise<ShopSettingsView> {
+    return toShopSettingsView(await loadShopSettings(this.ctx.db.read.manager));
+  }
+
+  /** Quotes already made keep the rates they were made with. */
+  async put(user: AuthUser, input: ShopSettingsInput): Promise<ShopSettingsView> {
+    const row = await this.ctx.db.write((manager) => writeShopSettings(manager, input, user.id, this.ctx.now()));
+    return toShopSettingsView(row);
+  }
+}

@@ -59,9 +59,11 @@ export type HttpMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 export type RequestOptions = {
   method?: HttpMethod;
-  /** Sent as JSON. */
+  /** Sent as JSON, except a FormData, which goes as multipart with the boundary fetch chooses. */
   body?: unknown;
   signal?: AbortSignal;
+  /** `blob` resolves with the raw body, for a file to save (a CSV export). */
+  responseType?: 'json' | 'blob';
 };
 
 let authToken: string | null = null;
@@ -141,9 +143,10 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
 
 /** One request, as it is: no renewal. */
 async function send<T>(path: string, options: RequestOptions): Promise<T> {
-  const { method = 'GET', body, signal } = options;
-  const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  const { method = 'GET', body, signal, responseType = 'json' } = options;
+  const multipart = typeof FormData !== 'undefined' && body instanceof FormData;
+  const headers: Record<string, string> = { Accept: responseType === 'blob' ? '*/*' : 'application/json' };
+  if (body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (authToken) headers.Authorization = `Bearer ${authToken}`;
 
   const controller = new AbortController();
@@ -160,7 +163,7 @@ async function send<T>(path: string, options: RequestOptions): Promise<T> {
       // The refresh cookie must travel to the session routes even when the API is on another
       // origin (the dev server); nothing else needs cookies.
       credentials: path.startsWith(AUTH_PATH_PREFIX) ? 'include' : 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : multipart ? (body as FormData) : JSON.stringify(body),
       signal: controller.signal,
     });
   } catch (cause) {
@@ -180,6 +183,7 @@ async function send<T>(path: string, options: RequestOptions): Promise<T> {
   }
 
   if (response.status === 204) return undefined as T;
+  if (response.ok && responseType === 'blob') return (await response.blob()) as T;
 
   const payload = await readJson(response);
   if (response.ok) {

@@ -7,11 +7,19 @@ import { AREAS, mayEnter, type Area } from './access';
 const AREA_ITEMS: Record<Area, readonly NavItem[]> = {
   rider: [{ href: '/rider', label: 'Garage' }],
   desk: [{ href: '/desk', label: 'Quotes' }],
-  counter: [{ href: '/counter', label: 'Spring catalogue' }],
+  counter: [
+    { href: '/counter', label: 'Catalogue' },
+    { href: '/counter/rates', label: 'Rates' },
+    { href: '/counter/import', label: 'Import' },
+    { href: '/counter/low-stock', label: 'Low stock' },
+    { href: '/counter/movements', label: 'Movements' },
+    { href: '/counter/identify', label: 'Identify' },
+  ],
   admin: [
     { href: '/admin', label: 'Shop' },
     { href: '/admin/users', label: 'Users' },
     { href: '/admin/outbox', label: 'Outbox' },
+    { href: '/admin/bike-models', label: 'Shop data' },
   ],
 };
 

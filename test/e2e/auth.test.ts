@@ -19,8 +19,8 @@ import { RunningServer, startServer } from './server-process';
 const AREAS = {
   rider: { heading: 'Garage', nav: ['Garage'] },
   desk: { heading: 'Quotes', nav: ['Quotes'] },
-  counter: { heading: 'Spring catalogue', nav: ['Spring catalogue'] },
-  admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Quotes', 'Spring catalogue'] },
+  counter: { heading: 'Spring catalogue', nav: ['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
+  admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Shop data', 'Quotes', 'Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
 } as const;
 
 const rider = DEMO_ACCOUNTS.find((account) => account.role === 'rider')!;

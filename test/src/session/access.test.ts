@@ -59,7 +59,7 @@ describe('navItemsFor', () => {
   it('offers each role its own area only', () => {
     expect(labels('rider')).toEqual(['Garage']);
     expect(labels('desk')).toEqual(['Quotes']);
-    expect(labels('counter')).toEqual(['Spring catalogue']);
+    expect(labels('counter')).toEqual(['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify']);
   });
 
   it("offers the admin the shop's screens first, then the desk and the counter", () => {
@@ -67,8 +67,14 @@ describe('navItemsFor', () => {
       ['Shop', '/admin'],
       ['Users', '/admin/users'],
       ['Outbox', '/admin/outbox'],
+      ['Shop data', '/admin/bike-models'],
       ['Quotes', '/desk'],
-      ['Spring catalogue', '/counter'],
+      ['Catalogue', '/counter'],
+      ['Rates', '/counter/rates'],
+      ['Import', '/counter/import'],
+      ['Low stock', '/counter/low-stock'],
+      ['Movements', '/counter/movements'],
+      ['Identify', '/counter/identify'],
     ]);
   });
 });

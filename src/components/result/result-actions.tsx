@@ -1,0 +1,93 @@
+import { Link, router } from 'expo-router';
+import { useState } from 'react';
+import { View } from 'react-native';
+
+import { stepHref } from '@/components/garage/flow-href';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { ThemedText } from '@/components/ui/themed-text';
+import { useStartDraft } from '@/hooks/use-draft';
+import { useSetupChange } from '@/hooks/use-setup-log';
+import type { SizingRecord } from '@shared/types/garage';
+import type { EndKind } from '@shared/types/sizing';
+import { useTheme } from '@/theme';
+
+import { preloadUnitsOf } from './end-result-card';
+import { formatPreloadChange } from './preload-text';
+
+/** What the rider does next: record the preload change, measure again, print the sheet. */
+export function ResultActions({ record }: { record: SizingRecord }) {
+  const { spacing } = useTheme();
+  const bikeId = record.bikeId;
+  const recordChange = useSetupChange(bikeId ?? 0);
+  const startDraft = useStartDraft();
+  const [busy, setBusy] = useState(false);
+  const [done, setDone] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const changed = (['front', 'rear'] as const).filter((end) => {
+    const result = record.result[end];
+    return result && preloadUnitsOf(result) !== 0;
+  });
+
+  async function run(action: () => Promise<void>) {
+    setBusy(true);
+    setError(null);
+    try {
+      await action();
+    } catch (cause) {
+      setError((cause as Error).message);
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  const applyPreload = () =>
+    run(async () => {
+      const input: Partial<Record<EndKind, { preloadPosition: number }>> = {};
+      const parts: string[] = [];
+      for (const end of changed) {
+        const preload = record.result[end]!.preload!;
+        input[end] = { preloadPosition: preload.position };
+        parts.push(`${end}: ${formatPreloadChange(preloadUnitsOf(record.result[end]!), preload.unit)}`);
+      }
+      await recordChange({ ...input, note: `Preload as advised (${parts.join('; ')})` });
+      setDone('The change is in the setup log. Measure again to see what it gave.');
+    });
+
+  const remeasure = () =>
+    run(async () => {
+      if (!bikeId) return;
+      await startDraft(bikeId, true);
+      router.push(stepHref(bikeId, 'weigh-in'));
+    });
+
+  return (
+    <Card testID="result-actions">
+      <ThemedText type="heading">Next</ThemedText>
+      {done && (
+        <ThemedText color="success" testID="preload-recorded">
+          {done}
+        </ThemedText>
+      )}
+      {error && (
+        <ThemedText color="danger" role="alert">
+          {error}
+        </ThemedText>
+      )}
+      <View style={{ flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm }}>
+        {bikeId && changed.length > 0 && !done && (
+          <Button label="I changed the preload" disabled={busy} onPress={() => void applyPreload()} testID="apply-preload" />
+        )}
+        {bikeId && <Button variant="secondary" label="Re-measure after adjusting" disabled={busy} onPress={() => void remeasure()} testID="remeasure" />}
+        {bikeId && (
+          <Link href={`/rider/bikes/${bikeId}/log`} asChild>
+            <Button variant="secondary" label="Setup log" testID="open-log" />
+          </Link>
+        )}
+        <Link href={`/rider/results/${record.id}/sheet`} asChild>
+          <Button variant="secondary" label="Setup sheet to print" testID="open-sheet" />
+        </Link>
+      </View>
+    </Card>
+  );
+}

@@ -1,0 +1,288 @@
+/**
+ * The rider's whole pass in a real browser at phone size: add a bike from a shop model, weigh in,
+ * measure both ends with pushed and lifted readings (closing the tab halfway and resuming), and
+ * read the result; every figure on it must equal the engine's own answer (POST /api/sizing) to
+ * the stored request. Then the preload change goes in the setup log, a re-measure follows, and
+ * back to baseline lists the undo. At wide size the result sits in two columns.
+ *
+ * Hand-worked check: static sag = extended − mean(pushed, lifted) = 560 − (532 + 540) / 2 = 24 mm.
+ */
+import { Browser, Page } from 'playwright-core';
+
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
+import { formatNumber } from '../../shared/sizing/format';
+import type { SizingRecord } from '../../shared/types/garage';
+import type { EndResult, SizingResult } from '../../shared/types/sizing';
+import { signInThroughForm, waitForPath } from './auth-helpers';
+import { launchBrowser, openPage, screenshot } from './browser';
+import { RunningServer, startServer } from './server-process';
+
+jest.setTimeout(240_000);
+
+const rider = DEMO_ACCOUNTS.find((account) => account.role === 'rider')!;
+
+/** Readings in mm: extended, then [pushed, lifted] on its wheels and with the rider aboard. */
+type EndReadings = { extended: string; static: readonly [string, string]; rider: readonly [string, string] };
+
+const READINGS: Record<'front' | 'rear', EndReadings> = {
+  front: { extended: '560', static: ['532', '540'], rider: ['512', '520'] },
+  rear: { extended: '600', static: ['586', '592'], rider: ['541', '549'] },
+};
+
+const REMEASURE: Record<'front' | 'rear', EndReadings> = {
+  front: { extended: '560', static: ['533', '539'], rider: ['513', '519'] },
+  rear: { extended: '600', static: ['588', '594'], rider: ['551', '557'] },
+};
+
+let server: RunningServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startServer();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]:visible`);
+
+async function signIn(page: Page) {
+  await page.goto(`${server.url}/sign-in`);
+  await signInThroughForm(page, rider.email, DEMO_PASSWORD);
+  await waitForPath(page, '/rider');
+  await page.getByRole('heading', { name: 'Garage', level: 1 }).waitFor();
+}
+
+async function next(page: Page) {
+  await byTestId(page, 'flow-next').click();
+}
+
+async function measureEnd(page: Page, end: 'front' | 'rear', values: EndReadings, shots: boolean) {
+  await page.waitForURL((url) => url.pathname.endsWith(`/${end}-extended`));
+  if (shots) await screenshot(page, `rider-measure-${end}-extended-phone`);
+  await byTestId(page, 'reading-value').fill(values.extended);
+  await next(page);
+  for (const stage of ['static', 'rider'] as const) {
+    await page.waitForURL((url) => url.pathname.endsWith(`/${end}-${stage}`));
+    if (shots) await screenshot(page, `rider-measure-${end}-${stage}-phone`);
+    await byTestId(page, 'reading-pushed').fill(values[stage][0]);
+    await byTestId(page, 'reading-lifted').fill(values[stage][1]);
+    await next(page);
+  }
+}
+
+async function apiToken(): Promise<string> {
+  const response = await fetch(`${server.url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: rider.email, password: DEMO_PASSWORD }),
+  });
+  return ((await response.json()) as { token: string }).token;
+}
+
+async function engineAnswer(recordId: number): Promise<SizingResult> {
+  const headers = { Authorization: `Bearer ${await apiToken()}`, 'Content-Type': 'application/json' };
+  const { record } = (await (await fetch(`${server.url}/api/sizing-records/${recordId}`, { headers })).json()) as { record: SizingRecord };
+  const answer = await fetch(`${server.url}/api/sizing`, { method: 'POST', headers, body: JSON.stringify(record.request) });
+  return (await answer.json()) as SizingResult;
+}
+
+const mm = (value: number | null) => (value === null ? '–' : `${formatNumber(value, 1)} mm`);
+const pct = (value: number | null) => `${formatNumber(value ?? 0, 1)} %`;
+
+async function expectFigures(page: Page, result: EndResult) {
+  const text = (name: string) => byTestId(page, `result-${result.end}-${name}`).innerText();
+  expect(await text('static-sag')).toBe(mm(result.staticSagMm));
+  expect(await text('rider-sag')).toBe(mm(result.riderSagMm));
+  expect(await text('static-sag-pct')).toBe(pct(result.staticSagPct));
+  expect(await text('rider-sag-pct')).toBe(pct(result.riderSagPct));
+  expect(await text('travel')).toBe(mm(result.travelMm));
+  expect(await text('verdict')).toBe(result.verdictText);
+  expect(await text('installed-rate')).toBe(`${formatNumber(result.installedRateNmm, 1)} N/mm`);
+  if (result.preload) {
+    expect(await text('rider-sag-after')).toBe(mm(result.preload.riderSagAfterMm));
+    expect(await text('static-sag-after')).toBe(mm(result.preload.staticSagAfterMm));
+  }
+  const hz = (value: number | null) => (value === null ? '–' : `${formatNumber(value, 2)} Hz`);
+  expect(await text('freq-current')).toBe(hz(result.rideFrequencyHz.current));
+  expect(await text('freq-recommended')).toBe(hz(result.rideFrequencyHz.recommended));
+}
+
+test('a rider measures a bike from a shop model, resumes, adjusts and re-measures', async () => {
+  let { page, errors, context } = await openPage(browser, 'phone');
+  await signIn(page);
+  await screenshot(page, 'rider-garage-phone');
+
+  await byTestId(page, 'add-bike').click();
+  await waitForPath(page, '/rider/bikes/new');
+  await page.getByRole('button', { name: 'Tarn 690 Roadster' }).click();
+  await byTestId(page, 'field-nickname').fill('Test Tarn');
+  await screenshot(page, 'rider-add-bike-phone');
+  await page.getByRole('button', { name: 'Add to garage' }).click();
+  await waitForPath(page, '/rider');
+  const card = page.locator('[data-testid^="bike-"]:visible', { hasText: 'Test Tarn' });
+  await card.waitFor();
+  const bikeId = Number((await card.getAttribute('data-testid'))!.replace('bike-', ''));
+
+  await byTestId(page, `measure-${bikeId}`).click();
+  await page.waitForURL((url) => url.pathname === `/rider/measure/${bikeId}/weigh-in`);
+  await byTestId(page, 'field-bodyKg').fill('82');
+  await screenshot(page, 'rider-measure-weigh-in-phone');
+  await page.getByRole('button', { name: 'Confirm and go on' }).click();
+  await page.waitForURL((url) => url.pathname.endsWith('/ends'));
+  await screenshot(page, 'rider-measure-ends-phone');
+  await next(page);
+
+  // Front extended and static, then the tab is closed as a flat battery would.
+  await page.waitForURL((url) => url.pathname.endsWith('/front-extended'));
+  await byTestId(page, 'reading-value').fill(READINGS.front.extended);
+  await next(page);
+  await page.waitForURL((url) => url.pathname.endsWith('/front-static'));
+  // A static length above the extended one is refused as typed, naming what to re-measure.
+  await byTestId(page, 'reading-pushed').fill('570');
+  await page.getByText('The static length is longer than the extended length').waitFor();
+  await screenshot(page, 'rider-measure-front-static-error-phone');
+  await byTestId(page, 'reading-pushed').fill(READINGS.front.static[0]);
+  await byTestId(page, 'reading-lifted').fill(READINGS.front.static[1]);
+  await next(page);
+  await page.waitForURL((url) => url.pathname.endsWith('/front-rider'));
+  expect(errors).toEqual([]);
+  await context.close();
+
+  ({ page, errors, context } = await openPage(browser, 'phone'));
+  await signIn(page);
+  await byTestId(page, `resume-${bikeId}`).click();
+  await page.waitForURL((url) => url.pathname.endsWith('/front-rider'));
+  await byTestId(page, 'flow-back').click();
+  await page.waitForURL((url) => url.pathname.endsWith('/front-static'));
+  expect(await byTestId(page, 'reading-pushed').inputValue()).toBe(READINGS.front.static[0]);
+  expect(await byTestId(page, 'reading-lifted').inputValue()).toBe(READINGS.front.static[1]);
+  await screenshot(page, 'rider-measure-resumed-phone');
+  await next(page);
+  await page.waitForURL((url) => url.pathname.endsWith('/front-rider'));
+  await byTestId(page, 'reading-pushed').fill(READINGS.front.rider[0]);
+  await byTestId(page, 'reading-lifted').fill(READINGS.front.rider[1]);
+  await screenshot(page, 'rider-measure-front-rider-phone');
+  await next(page);
+  await measureEnd(page, 'rear', READINGS.rear, true);
+
+  await page.waitForURL((url) => url.pathname.endsWith('/review'));
+  // 560 − (532 + 540) / 2 = 560 − 536 = 24 mm, worked by hand.
+  expect(await byTestId(page, 'review-front-static-sag').innerText()).toBe('24 mm');
+  await screenshot(page, 'rider-measure-review-phone');
+  await page.getByRole('button', { name: 'Work it out' }).click();
+  await page.waitForURL((url) => /^\/rider\/results\/\d+$/.test(url.pathname));
+  const recordId = Number(page.url().split('/').pop());
+  await byTestId(page, 'result-front-verdict').waitFor();
+  await screenshot(page, 'rider-result-phone');
+  // The ride preview: road step by default; the damping ratio is the result's until changed.
+  const damping = byTestId(page, 'result-rear-preview-damping');
+  await damping.scrollIntoViewIfNeeded();
+  const assumed = await damping.innerText();
+  await page.getByRole('button', { name: 'More damping' }).last().click();
+  expect(await damping.innerText()).not.toBe(assumed);
+  await screenshot(page, 'rider-result-preview-phone');
+  await byTestId(page, 'result-actions').scrollIntoViewIfNeeded();
+  await screenshot(page, 'rider-result-actions-phone');
+
+  const answer = await engineAnswer(recordId);
+  await expectFigures(page, answer.front!);
+  await expectFigures(page, answer.rear!);
+  // The hand-worked figure again, on the result itself.
+  expect(await byTestId(page, 'result-front-static-sag').innerText()).toBe('24 mm');
+
+  await byTestId(page, 'apply-preload').click();
+  await byTestId(page, 'preload-recorded').waitFor();
+  await byTestId(page, 'remeasure').click();
+  await page.waitForURL((url) => url.pathname === `/rider/measure/${bikeId}/weigh-in`);
+  await page.getByRole('button', { name: 'Confirm and go on' }).click();
+  await page.waitForURL((url) => url.pathname.endsWith('/ends'));
+  await next(page);
+  await page.waitForURL((url) => url.pathname.endsWith('/front-extended'));
+  await byTestId(page, 'remeasure-hint').waitFor();
+  await screenshot(page, 'rider-remeasure-hint-phone');
+  await byTestId(page, 'reading-value').fill(REMEASURE.front.extended);
+  await next(page);
+  for (const stage of ['static', 'rider'] as const) {
+    await page.waitForURL((url) => url.pathname.endsWith(`/front-${stage}`));
+    await byTestId(page, 'reading-pushed').fill(REMEASURE.front[stage][0]);
+    await byTestId(page, 'reading-lifted').fill(REMEASURE.front[stage][1]);
+    await next(page);
+  }
+  await measureEnd(page, 'rear', REMEASURE.rear, false);
+  await page.waitForURL((url) => url.pathname.endsWith('/review'));
+  await page.getByRole('button', { name: 'Work it out' }).click();
+  await page.waitForURL((url) => /^\/rider\/results\/\d+$/.test(url.pathname) && !url.pathname.endsWith(`/${recordId}`));
+
+  await byTestId(page, 'open-log').click();
+  await waitForPath(page, `/rider/bikes/${bikeId}/log`);
+  await page.locator('[data-testid^="log-entry-"]').nth(2).waitFor();
+  expect(await page.locator('[data-testid^="log-entry-"]').count()).toBe(3);
+  await page.getByText(/preload .* → /).first().waitFor();
+  await byTestId(page, 'back-to-baseline').click();
+  await byTestId(page, 'baseline-step-0').waitFor();
+  await screenshot(page, 'rider-setup-log-phone');
+  expect(errors).toEqual([]);
+  await context.close();
+
+  // Wide: the first result in two columns, front beside rear.
+  ({ page, errors, context } = await openPage(browser, 'wide'));
+  await page.goto(`${server.url}/sign-in`);
+  await signInThroughForm(page, rider.email, DEMO_PASSWORD);
+  await waitForPath(page, '/rider');
+  await page.goto(`${server.url}/rider/results/${recordId}`);
+  await byTestId(page, 'result-front-verdict').waitFor();
+  const front = (await byTestId(page, 'result-front').boundingBox())!;
+  const rear = (await byTestId(page, 'result-rear').boundingBox())!;
+  expect(rear.x).toBeGreaterThan(front.x + front.width - 1);
+  expect(Math.abs(rear.y - front.y)).toBeLessThan(2);
+  await screenshot(page, 'rider-result-wide');
+  await page.goto(`${server.url}/rider/bikes/${bikeId}/log`);
+  await byTestId(page, 'log-table').waitFor();
+  await screenshot(page, 'rider-setup-log-wide');
+  await page.goto(`${server.url}/rider/results/${recordId}/sheet`);
+  await byTestId(page, 'setup-sheet').waitFor();
+  await screenshot(page, 'rider-setup-sheet-wide');
+
+  // Imperial: the same stored sag in inches (24 mm / 25.4 = 0.94 in), then back to metric.
+  await page.goto(`${server.url}/rider`);
+  await page.getByRole('radio', { name: 'in · lb' }).click();
+  await page.goto(`${server.url}/rider/results/${recordId}`);
+  await byTestId(page, 'result-front-static-sag').filter({ hasText: 'in' }).waitFor();
+  expect(await byTestId(page, 'result-front-static-sag').innerText()).toBe('0.94 in');
+  expect(await byTestId(page, 'result-rear-installed-rate').innerText()).toBe(`${formatNumber(answer.rear!.installedRateNmm / 0.1751268, 0)} lbf/in`);
+  await screenshot(page, 'rider-result-imperial-wide');
+  await page.goto(`${server.url}/rider`);
+  await page.getByRole('radio', { name: 'mm · kg' }).click();
+  await page.getByRole('radio', { name: 'N/mm' }).waitFor();
+  expect(errors).toEqual([]);
+  await context.close();
+});
+
+test('the admin opens the shop data editors', async () => {
+  const admin = DEMO_ACCOUNTS.find((account) => account.role === 'admin')!;
+  const { page, errors, context } = await openPage(browser, 'wide');
+  await page.goto(`${server.url}/sign-in`);
+  await signInThroughForm(page, admin.email, DEMO_PASSWORD);
+  await waitForPath(page, '/admin');
+  for (const [path, heading] of [
+    ['bike-models', 'Bike models'],
+    ['target-profiles', 'Target profiles'],
+    ['engine-settings', 'Engine settings'],
+    ['audit', 'Audit'],
+  ] as const) {
+    if (path === 'bike-models') await page.getByRole('navigation').getByRole('link', { name: 'Shop data' }).click();
+    else await byTestId(page, 'shop-data-links').getByRole('link', { name: heading }).click();
+    await waitForPath(page, `/admin/${path}`);
+    await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
+    await page.getByRole('status').waitFor({ state: 'detached' });
+    await screenshot(page, `rider-admin-${path}-wide`);
+  }
+  await page.goto(`${server.url}/admin/bike-models?edit=1`);
+  await byTestId(page, 'field-nickname').waitFor();
+  await screenshot(page, 'rider-admin-bike-model-edit-wide');
+  expect(errors).toEqual([]);
+  await context.close();
+});

@@ -34,6 +34,15 @@ export function quoteRoutes(ctx: AppContext): RouteSpec[] {
       },
     },
     {
+      method: 'post',
+      path: '/sizing-records/:id/quote-request',
+      access: anyRole,
+      handler: async (req, res) => {
+        const { quote, created } = await quotes.requestForRecord(currentUser(req), idParam(req));
+        res.status(created ? 201 : 200).json({ quote, created });
+      },
+    },
+    {
       method: 'get',
       path: '/quotes/:id',
       access: anyRole,

@@ -35,6 +35,8 @@ import { loadShop, loadShopSettings } from './shop-settings.service';
 import { StockService, toSqliteDatetime, writeCatalogue } from './stock.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
+/** A quote in one of these states answers a rider's second request for the same result. */
+const OPEN_FOR_REQUESTS: QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked'];
 const KIND_OF_END: Record<EndKind, 'fork' | 'shock'> = { front: 'fork', rear: 'shock' };
 const PART: Record<EndKind, string> = { front: 'fork', rear: 'shock' };
 
@@ -205,49 +207,79 @@ export class QuotesService {
     const id = await this.ctx.db.write(async (manager) => {
       const record = await manager.findOneBy(SizingRecord, { id: input.sizingRecordId });
       if (!record) throw new ValidationError({ sizingRecordId: 'There is no such sizing record.' });
-      const settings = await loadShopSettings(manager);
-      const shop = await loadShop(manager);
-      let lineInputs = input.lines;
-      if (!lineInputs) {
-        const skus = (['front', 'rear'] as const).map((end) => recommendedFor(record, end)?.sku).filter((s): s is string => !!s);
-        const springs = skus.length ? await manager.findBy(SpringRate, { sku: In(skus), active: true }) : [];
-        lineInputs = defaultLineInputs(record, new Map(springs.map((s) => [s.sku, s])), settings);
-      }
-      const plans = await planLines(manager, record, lineInputs, settings.labourRateCentsPerHour, settings);
-      const now = this.ctx.now();
-      const year = now.getUTCFullYear();
-      const sequence = await nextSequence(manager, year);
-      const quote = manager.create(Quote, {
-        number: formatQuoteNumber(year, sequence),
-        year,
-        sequence,
-        version: 1,
-        previousId: null,
-        supersededById: null,
-        status: 'draft',
-        riderId: record.riderId,
-        bikeId: record.bikeId,
-        sizingRecordId: record.id,
-        createdById: user.id,
-        currency: shop.currency,
-        shop: shop.identity,
-        cautions: settings.cautions,
-        labourRateCentsPerHour: settings.labourRateCentsPerHour,
-        taxBasisPoints: settings.taxBasisPoints,
-        paidCents: 0,
-        refundedCents: 0,
-        validUntil: new Date(now.getTime() + settings.quoteValidityDays * DAY_MS),
-        tokenHash: null,
-        sentAt: null,
-        fittingAt: null,
-        createdAt: now,
-        updatedAt: now,
-      });
-      const saved = await saveWithLines(manager, quote, plans, settings.deposit);
-      await manager.insert(QuoteStatusEvent, { quoteId: saved.id, fromStatus: null, toStatus: 'draft', ...eventActor(actorOf(user)), note: `From sizing record ${record.id}`, at: now });
-      return saved.id;
+      return this.createFromRecord(manager, user, record, input.lines, `From sizing record ${record.id}`);
     });
     return this.get(user, id);
+  }
+
+  /**
+   * A rider asks the shop to quote for one of their results: a draft with the recommended lines
+   * appears on the desk's board. Asking again while a quote for that result is still open
+   * answers that quote rather than starting a second one.
+   */
+  async requestForRecord(user: AuthUser, sizingRecordId: number): Promise<{ quote: QuoteView; created: boolean }> {
+    const outcome = await this.ctx.db.write(async (manager) => {
+      const record = await manager.findOneBy(SizingRecord, { id: sizingRecordId });
+      if (!record) throw new NotFoundError('There is no such sizing record.');
+      assertOwnerOrStaff(user, record.riderId);
+      const open = await manager.findOne(Quote, {
+        where: { sizingRecordId: record.id, status: In(OPEN_FOR_REQUESTS) },
+        order: { version: 'DESC' },
+      });
+      if (open) return { id: open.id, created: false };
+      return { id: await this.createFromRecord(manager, user, record, undefined, 'Asked for by the rider from a saved result'), created: true };
+    });
+    return { quote: await this.get(user, outcome.id), created: outcome.created };
+  }
+
+  private async createFromRecord(
+    manager: EntityManager,
+    user: AuthUser,
+    record: SizingRecord,
+    lines: QuoteLineInput[] | undefined,
+    note: string,
+  ): Promise<number> {
+    const settings = await loadShopSettings(manager);
+    const shop = await loadShop(manager);
+    let lineInputs = lines;
+    if (!lineInputs) {
+      const skus = (['front', 'rear'] as const).map((end) => recommendedFor(record, end)?.sku).filter((s): s is string => !!s);
+      const springs = skus.length ? await manager.findBy(SpringRate, { sku: In(skus), active: true }) : [];
+      lineInputs = defaultLineInputs(record, new Map(springs.map((s) => [s.sku, s])), settings);
+    }
+    const plans = await planLines(manager, record, lineInputs, settings.labourRateCentsPerHour, settings);
+    const now = this.ctx.now();
+    const year = now.getUTCFullYear();
+    const sequence = await nextSequence(manager, year);
+    const quote = manager.create(Quote, {
+      number: formatQuoteNumber(year, sequence),
+      year,
+      sequence,
+      version: 1,
+      previousId: null,
+      supersededById: null,
+      status: 'draft',
+      riderId: record.riderId,
+      bikeId: record.bikeId,
+      sizingRecordId: record.id,
+      createdById: user.id,
+      currency: shop.currency,
+      shop: shop.identity,
+      cautions: settings.cautions,
+      labourRateCentsPerHour: settings.labourRateCentsPerHour,
+      taxBasisPoints: settings.taxBasisPoints,
+      paidCents: 0,
+      refundedCents: 0,
+      validUntil: new Date(now.getTime() + settings.quoteValidityDays * DAY_MS),
+      tokenHash: null,
+      sentAt: null,
+      fittingAt: null,
+      createdAt: now,
+      updatedAt: now,
+    });
+    const saved = await saveWithLines(manager, quote, plans, settings.deposit);
+    await manager.insert(QuoteStatusEvent, { quoteId: saved.id, fromStatus: null, toStatus: 'draft', ...eventActor(actorOf(user)), note, at: now });
+    return saved.id;
   }
 
   async updateLines(user: AuthUser, id: number, lines: QuoteLineInput[]): Promise<QuoteView> {

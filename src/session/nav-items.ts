@@ -6,7 +6,10 @@ import { AREAS, mayEnter, type Area } from './access';
 
 const AREA_ITEMS: Record<Area, readonly NavItem[]> = {
   rider: [{ href: '/rider', label: 'Garage' }],
-  desk: [{ href: '/desk', label: 'Quotes' }],
+  desk: [
+    { href: '/desk', label: 'Quotes' },
+    { href: '/desk/customers', label: 'Customers' },
+  ],
   counter: [
     { href: '/counter', label: 'Catalogue' },
     { href: '/counter/rates', label: 'Rates' },

@@ -18,9 +18,9 @@ import { RunningServer, startServer } from './server-process';
 /** What each role's navigation offers and the heading of the area it lands on. */
 const AREAS = {
   rider: { heading: 'Garage', nav: ['Garage'] },
-  desk: { heading: 'Quotes', nav: ['Quotes'] },
+  desk: { heading: 'Quotes', nav: ['Quotes', 'Customers'] },
   counter: { heading: 'Spring catalogue', nav: ['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
-  admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Shop data', 'Quotes', 'Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
+  admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Shop data', 'Quotes', 'Customers', 'Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
 } as const;
 
 const rider = DEMO_ACCOUNTS.find((account) => account.role === 'rider')!;

@@ -99,6 +99,7 @@ test('the desk builds and sends a quote; the rider accepts and pays the deposit 
   await wide.page.getByRole('link', { name: 'Customers' }).click();
   await wide.page.getByRole('heading', { name: 'Customers', level: 1 }).waitFor();
   await wide.page.getByLabel('Search by name or e-mail').fill('Linden');
+  await screenshot(wide.page, 'desk-customers-wide');
   await wide.page.getByRole('link', { name: `${rider.name}, ${rider.email}` }).click();
   await visible(wide.page, `customer-bike-${bikeId}`).waitFor();
   await screenshot(wide.page, 'desk-customer-wide');
@@ -120,6 +121,9 @@ test('the desk builds and sends a quote; the rider accepts and pays the deposit 
   await wide.page.getByRole('status').getByText(`Sent to ${rider.email}.`).waitFor();
   await visible(wide.page, 'quote-status').getByText('Sent').waitFor();
   await screenshot(wide.page, 'desk-quote-sent-wide');
+  await wide.page.getByRole('link', { name: '← All quotes' }).click();
+  await visible(wide.page, 'board-column-sent').getByText('Mara Linden').waitFor();
+  await screenshot(wide.page, 'desk-board-sent-wide');
   expect(wide.errors).toEqual([]);
 
   const link = new URL(await quoteLinkFromOutbox());

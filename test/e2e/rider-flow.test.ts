@@ -193,6 +193,10 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   // The hand-worked figure again, on the result itself.
   expect(await byTestId(page, 'result-front-static-sag').innerText()).toBe('24 mm');
 
+  await byTestId(page, 'ask-quote').click();
+  await byTestId(page, 'quote-requested').waitFor();
+  expect(await byTestId(page, 'quote-requested').innerText()).toMatch(/^The shop has your result: quote Q-\d{4}-\d{4}/);
+
   await byTestId(page, 'apply-preload').click();
   await byTestId(page, 'preload-recorded').waitFor();
   await byTestId(page, 'remeasure').click();

@@ -8,8 +8,8 @@ export default function ShopScreen() {
     <Screen>
       <ThemedText type="title">Shop</ThemedText>
       <ThemedText>
-        Run the shop from here: who may sign in, and with which role. The shop&apos;s settings and
-        the target profiles every sizing starts from will join them.
+        Run the shop from here: who may sign in and with which role, and the shop data every sizing
+        starts from (bike models, target profiles, engine settings) under Shop data.
       </ThemedText>
       <Card>
         <ThemedText type="heading">Users</ThemedText>

@@ -30,7 +30,6 @@ export default function SpringCatalogueScreen() {
       <CounterLinks />
       <View style={[styles.row, { gap: spacing.sm }]}>
         <DownloadButton label="Export the catalogue" path={counterKeys.springsCsv} fileName="catalogue.csv" />
-        <DownloadButton label="Export the movements" path={counterKeys.movementsCsv} fileName="stock-movements.csv" />
       </View>
       <SpringFiltersBar filters={filters} unit={units.rateUnit} onChange={setFilters} />
       <SpringResults query={buildSpringQuery(filters, units.rateUnit)} onPage={(page) => setFilters({ ...filters, page })} />

@@ -32,7 +32,7 @@ export default function QuoteBoardScreen() {
       <View style={[styles.header, { gap: spacing.md }]}>
         <ThemedText type="title">Quotes</ThemedText>
         <Link href="/desk/customers" asChild>
-          <Button label="Customers" variant="secondary" />
+          <Button label="Find a customer" variant="secondary" />
         </Link>
       </View>
       <ThemedText color="textMuted">

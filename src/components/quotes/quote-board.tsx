@@ -26,24 +26,21 @@ export function QuoteCard({ quote }: { quote: QuoteSummary }) {
       <Pressable
         accessibilityRole="link"
         testID={`quote-card-${quote.number}`}
-        style={({ pressed }) => [
-          {
-            backgroundColor: pressed ? colors.accentSoft : colors.surface,
-            borderColor: colors.border,
-            borderWidth: 1,
-            borderRadius: radii.md,
-            padding: spacing.md,
-            gap: spacing.xxs,
-          },
-        ]}
+        // A plain style: the link that wraps the card drops a style given as a function.
+        style={{
+          backgroundColor: colors.surface,
+          borderColor: colors.border,
+          borderWidth: 1,
+          borderRadius: radii.md,
+          padding: spacing.md,
+          gap: spacing.xxs,
+        }}
       >
-        <View style={styles.row}>
-          <ThemedText type="label">
-            {quote.number}
-            {quote.version > 1 ? ` v${quote.version}` : ''}
-          </ThemedText>
-          <ThemedText type="figure">{formatMoney(quote.totalCents, quote.currency)}</ThemedText>
-        </View>
+        <ThemedText type="label">
+          {quote.number}
+          {quote.version > 1 ? ` v${quote.version}` : ''}
+        </ThemedText>
+        <ThemedText type="figure">{formatMoney(quote.totalCents, quote.currency)}</ThemedText>
         <ThemedText>{quote.rider.name}</ThemedText>
         {quote.bikeName && (
           <ThemedText type="caption" color="textMuted">
@@ -127,7 +124,6 @@ export function StatusFilter({
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', justifyContent: 'space-between', gap: 8 },
   columns: { flexDirection: 'row', alignItems: 'flex-start' },
   column: { flex: 1, minWidth: 0 },
   chips: { flexDirection: 'row', flexWrap: 'wrap' },

@@ -23,7 +23,7 @@ export function QuoteLines({ lines, currency }: { lines: QuoteLineView[]; curren
             <ThemedText>{line.description}</ThemedText>
             <ThemedText type="caption" color="textMuted">
               {line.kind === 'spring'
-                ? `${line.end ? `${END_LABELS[line.end]} · ` : ''}${line.sku ?? ''} · ${line.quantity} × ${formatMoney(line.unitPriceCents, currency)}`
+                ? `${line.end ? `${END_LABELS[line.end]} · ` : ''}${line.quantity} × ${formatMoney(line.unitPriceCents, currency)}`
                 : `${line.quantity} × ${line.minutes ?? 0} min`}
             </ThemedText>
           </View>

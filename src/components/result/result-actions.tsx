@@ -7,6 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useStartDraft } from '@/hooks/use-draft';
+import { requestQuote } from '@/hooks/use-quote-request';
 import { useSetupChange } from '@/hooks/use-setup-log';
 import type { SizingRecord } from '@shared/types/garage';
 import type { EndKind } from '@shared/types/sizing';
@@ -15,7 +16,7 @@ import { useTheme } from '@/theme';
 import { preloadUnitsOf } from './end-result-card';
 import { formatPreloadChange } from './preload-text';
 
-/** What the rider does next: record the preload change, measure again, print the sheet. */
+/** What the rider does next: record the preload change, measure again, ask the shop for a quote, print the sheet. */
 export function ResultActions({ record }: { record: SizingRecord }) {
   const { spacing } = useTheme();
   const bikeId = record.bikeId;
@@ -24,6 +25,7 @@ export function ResultActions({ record }: { record: SizingRecord }) {
   const [busy, setBusy] = useState(false);
   const [done, setDone] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const [quoteAsked, setQuoteAsked] = useState<string | null>(null);
   const changed = (['front', 'rear'] as const).filter((end) => {
     const result = record.result[end];
     return result && preloadUnitsOf(result) !== 0;
@@ -61,12 +63,27 @@ export function ResultActions({ record }: { record: SizingRecord }) {
       router.push(stepHref(bikeId, 'weigh-in'));
     });
 
+  const askForQuote = () =>
+    run(async () => {
+      const { quote, created } = await requestQuote(record.id);
+      setQuoteAsked(
+        created
+          ? `The shop has your result: quote ${quote.number} is being prepared and will come to you by e-mail.`
+          : `You asked already: quote ${quote.number} for this result is with the shop.`,
+      );
+    });
+
   return (
     <Card testID="result-actions">
       <ThemedText type="heading">Next</ThemedText>
       {done && (
         <ThemedText color="success" testID="preload-recorded">
           {done}
+        </ThemedText>
+      )}
+      {quoteAsked && (
+        <ThemedText color="success" testID="quote-requested">
+          {quoteAsked}
         </ThemedText>
       )}
       {error && (
@@ -83,6 +100,9 @@ export function ResultActions({ record }: { record: SizingRecord }) {
           <Link href={`/rider/bikes/${bikeId}/log`} asChild>
             <Button variant="secondary" label="Setup log" testID="open-log" />
           </Link>
+        )}
+        {!quoteAsked && (
+          <Button variant="secondary" label="Ask the shop for a quote" disabled={busy} onPress={() => void askForQuote()} testID="ask-quote" />
         )}
         <Link href={`/rider/results/${record.id}/sheet`} asChild>
           <Button variant="secondary" label="Setup sheet to print" testID="open-sheet" />

@@ -1,6 +1,7 @@
 /** The rider's signed-in equivalents of the link's actions, and the moves the flow refuses. */
 import request from 'supertest';
 import { makeTestContext, TestContext } from '../test-context';
+import { READINGS } from '../rider/helpers';
 import { createQuote, DeskShop, sendQuote, setUpDeskShop } from './helpers';
 
 let t: TestContext;
@@ -43,4 +44,22 @@ test('a rider declines by the link; a declined quote can be revised but not acce
   const revised = await shop.asDesk.post(`/quotes/${quote.id}/revise`).expect(201);
   expect(revised.body.quote.version).toBe(2);
   await request(t.app).get(`/api/customer-quotes/${token}`).expect(404);
+});
+
+test('a rider asks the shop to quote for a saved result, once while that quote is open', async () => {
+  const record = await shop.asRider.post(`/bikes/${shop.bikeId}/sizing-records`, { readings: READINGS }).expect(201);
+  const recordId = record.body.record.id;
+  await shop.asOtherRider.post(`/sizing-records/${recordId}/quote-request`).expect(404);
+
+  const asked = await shop.asRider.post(`/sizing-records/${recordId}/quote-request`).expect(201);
+  expect(asked.body.created).toBe(true);
+  expect(asked.body.quote).toMatchObject({ status: 'draft', sizingRecordId: recordId });
+  expect(asked.body.quote.lines.length).toBeGreaterThan(0);
+  expect(asked.body.quote.history[0]).toMatchObject({ to: 'draft', actor: { kind: 'rider', id: shop.rider.id } });
+
+  const again = await shop.asRider.post(`/sizing-records/${recordId}/quote-request`).expect(200);
+  expect(again.body).toMatchObject({ created: false, quote: { id: asked.body.quote.id } });
+
+  const board = await shop.asDesk.get('/quotes?status=draft').expect(200);
+  expect(board.body.quotes.map((q: { id: number }) => q.id)).toContain(asked.body.quote.id);
 });

@@ -58,7 +58,7 @@ describe('navItemsFor', () => {
 
   it('offers each role its own area only', () => {
     expect(labels('rider')).toEqual(['Garage']);
-    expect(labels('desk')).toEqual(['Quotes']);
+    expect(labels('desk')).toEqual(['Quotes', 'Customers']);
     expect(labels('counter')).toEqual(['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify']);
   });
 
@@ -69,6 +69,7 @@ describe('navItemsFor', () => {
       ['Outbox', '/admin/outbox'],
       ['Shop data', '/admin/bike-models'],
       ['Quotes', '/desk'],
+      ['Customers', '/desk/customers'],
       ['Catalogue', '/counter'],
       ['Rates', '/counter/rates'],
       ['Import', '/counter/import'],

@@ -64,7 +64,9 @@ function BikeRecords({ bike }: { bike: GarageBike }) {
 }
 
 function describeEnd(label: string, end: SizingRecordSummary['front']): string | null {
-  return end ? `${label}: installed ${end.installedRateNmm} N/mm` : null;
+  if (!end) return null;
+  const best = end.bestRateNmm === null ? '' : `, best ${end.bestRateNmm} N/mm`;
+  return `${label}: installed ${end.installedRateNmm} N/mm${best}`;
 }
 
 function RecordRow({ record }: { record: SizingRecordSummary }) {

@@ -46,13 +46,14 @@ export default function CustomersScreen() {
               <Pressable
                 accessibilityRole="link"
                 accessibilityLabel={`${customer.name}, ${customer.email}`}
-                style={({ pressed }) => ({
-                  backgroundColor: pressed ? colors.accentSoft : colors.surface,
+                // A plain style: the link that wraps the row drops a style given as a function.
+                style={{
+                  backgroundColor: colors.surface,
                   borderColor: colors.border,
                   borderWidth: 1,
                   borderRadius: radii.md,
                   padding: spacing.md,
-                })}
+                }}
               >
                 <ThemedText type="bodyStrong">{customer.name}</ThemedText>
                 <ThemedText color="textMuted">

@@ -12,28 +12,13 @@ import { TargetProfile } from '../entities/target-profile.entity';
 import { NotFoundError, ValidationError } from '../errors';
 import { AuthUser } from '../middleware/auth';
 import { recordAudit } from './audit.service';
-import { toProfile } from './sizing-data.service';
+import { toProfile, toProfileRow } from './sizing-data.service';
 
 export interface ProfileInput {
   label: string;
   note: string;
   front: EndWindowsPct;
   rear: EndWindowsPct;
-}
-
-function toRow(input: ProfileInput): Partial<TargetProfile> {
-  return {
-    label: input.label,
-    note: input.note,
-    frontRiderSagMinPct: input.front.riderSagPct[0],
-    frontRiderSagMaxPct: input.front.riderSagPct[1],
-    frontStaticSagMinPct: input.front.staticSagPct[0],
-    frontStaticSagMaxPct: input.front.staticSagPct[1],
-    rearRiderSagMinPct: input.rear.riderSagPct[0],
-    rearRiderSagMaxPct: input.rear.riderSagPct[1],
-    rearStaticSagMinPct: input.rear.staticSagPct[0],
-    rearStaticSagMaxPct: input.rear.staticSagPct[1],
-  };
 }
 
 function toSettingRow(row: EngineSetting): EngineSettingRow {
@@ -47,7 +32,7 @@ export class ShopDataService {
     const after = await this.ctx.db.write(async (manager) => {
       const row = await manager.findOneBy(TargetProfile, { discipline });
       if (!row) throw new NotFoundError('There is no such target profile.');
-      const saved = await manager.save(TargetProfile, { ...row, ...toRow(input) });
+      const saved = await manager.save(TargetProfile, { ...row, ...toProfileRow(input) });
       const view = toProfile(saved);
       await recordAudit(manager, actor, this.ctx.now(), { entity: 'target-profile', entityKey: discipline, action: 'update', before: toProfile(row), after: view });
       this.ctx.sizingData.invalidate();

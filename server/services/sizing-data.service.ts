@@ -26,6 +26,22 @@ export function toProfile(row: TargetProfile): Profile {
   };
 }
 
+/** The columns of a target profile's row; the inverse of toProfile. */
+export function toProfileRow(input: Pick<Profile, 'label' | 'note' | 'front' | 'rear'>): Partial<TargetProfile> {
+  return {
+    label: input.label,
+    note: input.note,
+    frontRiderSagMinPct: input.front.riderSagPct[0],
+    frontRiderSagMaxPct: input.front.riderSagPct[1],
+    frontStaticSagMinPct: input.front.staticSagPct[0],
+    frontStaticSagMaxPct: input.front.staticSagPct[1],
+    rearRiderSagMinPct: input.rear.riderSagPct[0],
+    rearRiderSagMaxPct: input.rear.riderSagPct[1],
+    rearStaticSagMinPct: input.rear.staticSagPct[0],
+    rearStaticSagMaxPct: input.rear.staticSagPct[1],
+  };
+}
+
 function toCatalogueSpring(row: SpringRate): CatalogueSpring {
   return {
     sku: row.sku,

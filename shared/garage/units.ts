@@ -3,7 +3,7 @@
 import type { FieldQuantity } from '../schemas/bike.fields';
 import type { DisplayUnits, UnitsPreference, UnitSystem } from '../types/garage';
 import type { AdjusterUnit } from '../types/sizing';
-import type { RateUnit } from '../units';
+import type { DisplayUnit, RateUnit } from '../units';
 
 export const RATE_UNITS: readonly RateUnit[] = ['N/mm', 'kgf/mm', 'lbf/in'];
 
@@ -18,11 +18,12 @@ export function toDisplayUnits(preference: UnitsPreference): DisplayUnits {
   return { ...preference, length: metric ? 'mm' : 'in', mass: metric ? 'kg' : 'lb', force: metric ? 'N' : 'lbf' };
 }
 
-/** The unit a bike field is shown in; '' for plain numbers, text and choices. */
-export function displayUnitOf(quantity: FieldQuantity, units: DisplayUnits, adjusterUnit: AdjusterUnit = 'turns'): string {
-  switch (quantity) {
+export type QuantityKind = 'length' | 'mass' | 'rate' | 'force';
+
+/** The person's unit for one kind of quantity. */
+export function unitFor(kind: QuantityKind, units: DisplayUnits): DisplayUnit {
+  switch (kind) {
     case 'length':
-    case 'points':
       return units.length;
     case 'mass':
       return units.mass;
@@ -30,6 +31,19 @@ export function displayUnitOf(quantity: FieldQuantity, units: DisplayUnits, adju
       return units.rateUnit;
     case 'force':
       return units.force;
+  }
+}
+
+/** The unit a bike field is shown in; '' for plain numbers, text and choices. */
+export function displayUnitOf(quantity: FieldQuantity, units: DisplayUnits, adjusterUnit: AdjusterUnit = 'turns'): string {
+  switch (quantity) {
+    case 'length':
+    case 'points':
+      return units.length;
+    case 'mass':
+    case 'rate':
+    case 'force':
+      return unitFor(quantity, units);
     case 'adjuster':
       return adjusterUnit;
     case 'clicks':

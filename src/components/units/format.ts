@@ -3,23 +3,11 @@
  * N and N/mm; the conversion happens only here, at the edge, with shared/units.
  */
 import { formatNumber } from '@shared/sizing/format';
+import { unitFor, type QuantityKind } from '@shared/garage/units';
 import type { DisplayUnits } from '@shared/types/garage';
 import { fromSi, parseUserNumber, toSi, type DisplayUnit } from '@shared/units';
 
-export type QuantityKind = 'length' | 'mass' | 'rate' | 'force';
-
-export function unitFor(kind: QuantityKind, units: DisplayUnits): DisplayUnit {
-  switch (kind) {
-    case 'length':
-      return units.length;
-    case 'mass':
-      return units.mass;
-    case 'rate':
-      return units.rateUnit;
-    case 'force':
-      return units.force;
-  }
-}
+export { unitFor, type QuantityKind };
 
 /** Decimals that keep a tape or a scale reading honest in each unit. */
 const DIGITS: Partial<Record<DisplayUnit, number>> = { in: 2, 'kgf/mm': 2, 'lbf/in': 0, N: 0, lbf: 0 };

@@ -1,8 +1,8 @@
-import useSWR from 'swr';
+import useSWR, { useSWRConfig } from 'swr';
 
 import { api, type ApiError } from '@/api/client';
-import { deskKeys } from '@/api/keys';
-import type { GarageBike } from '@shared/types/garage';
+import { deskKeys, riderKeys } from '@/api/keys';
+import type { GarageBike, SizingRecord, WeighIn, WeighInAnswer } from '@shared/types/garage';
 import type { CustomerSummary } from '@shared/types/quote';
 
 type CustomerPage = { customers: CustomerSummary[]; total: number; page: number; pageSize: number };
@@ -15,7 +15,38 @@ export function useCustomers(q: string, page = 1) {
   });
 }
 
-/** One customer's garage, as the desk may read it. */
+/** A rider who walked in: the account gets a random password and they reset it later. */
+export async function createCustomer(input: { name: string; email: string }): Promise<CustomerSummary> {
+  const { customer } = await api.post<{ customer: CustomerSummary }>('/customers', input);
+  return customer;
+}
+
+/** One customer's garage, as the desk may read it, and the desk's additions to it. */
 export function useCustomerBikes(riderId: number) {
-  return useSWR<BikesAnswer, ApiError>(deskKeys.riderBikes(riderId), (path: string) => api.get<BikesAnswer>(path));
+  const { mutate } = useSWRConfig();
+  const swr = useSWR<BikesAnswer, ApiError>(deskKeys.riderBikes(riderId), (path: string) => api.get<BikesAnswer>(path));
+  async function addBike(modelId: number, nickname: string) {
+    const { bike } = await api.post<{ bike: GarageBike }>(riderKeys.bikes, { riderId, modelId, nickname });
+    await swr.mutate();
+    return bike;
+  }
+  /** No readings given: the server sizes both ends from the customer's weigh-in and the model. */
+  async function sizeFromWeights(bikeId: number) {
+    const { record } = await api.post<{ record: SizingRecord }>(riderKeys.bikeRecords(bikeId), { ends: ['front', 'rear'] });
+    await mutate(riderKeys.bikeRecords(bikeId));
+    return record;
+  }
+  return { ...swr, addBike, sizeFromWeights };
+}
+
+/** A customer's weigh-in as the desk reads and keeps it for them. */
+export function useCustomerWeighIn(riderId: number) {
+  const key = `${riderKeys.weighIn}?riderId=${riderId}`;
+  const swr = useSWR<WeighInAnswer, ApiError>(key, (path: string) => api.get<WeighInAnswer>(path));
+  async function save(weighIn: WeighIn) {
+    const answer = await api.put<WeighInAnswer>(key, weighIn);
+    await swr.mutate(answer, { revalidate: false });
+    return answer;
+  }
+  return { ...swr, save };
 }

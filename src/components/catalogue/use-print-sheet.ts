@@ -7,7 +7,7 @@ import { Platform } from 'react-native';
  * instead of the part that fits the window.
  */
 const PRINT_CSS = `@media print {
-  [role="navigation"], [role="button"], button, a[href^="/counter"] { display: none !important; }
+  [role="navigation"], [role="button"], button, a[href^="/counter"], a[href^="/desk"] { display: none !important; }
   html, body, #root, #root * { overflow: visible !important; height: auto !important; max-height: none !important; }
 }`;
 

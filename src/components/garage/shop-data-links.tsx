@@ -8,12 +8,13 @@ const EDITORS = [
   { href: '/admin/bike-models', label: 'Bike models' },
   { href: '/admin/target-profiles', label: 'Target profiles' },
   { href: '/admin/engine-settings', label: 'Engine settings' },
+  { href: '/admin/shop-settings', label: 'Shop settings' },
   { href: '/admin/audit', label: 'Audit' },
 ] as const;
 
 /**
  * The admin's shop data editors, linked from each of them: the frame's navigation holds one entry
- * for all four, so the side column stays short enough for a laptop screen.
+ * for all of them, so the side column stays short enough for a laptop screen.
  */
 export function ShopDataLinks({ current }: { current: (typeof EDITORS)[number]['href'] }) {
   const { spacing } = useTheme();

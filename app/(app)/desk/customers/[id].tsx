@@ -2,6 +2,8 @@ import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { WeighInForm } from '@/components/garage/weigh-in-form';
+import { AddBikeForm } from '@/components/quotes/add-bike-form';
 import { formatDateTime } from '@/components/quotes/quote-status';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -11,17 +13,22 @@ import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
-import { useCustomerBikes } from '@/hooks/use-customers';
+import { useBikeModels } from '@/hooks/use-bike-models';
+import { useCustomerBikes, useCustomerWeighIn } from '@/hooks/use-customers';
 import { createQuote } from '@/hooks/use-quote';
 import { useBikeRecords } from '@/hooks/use-sizing-records';
+import { useTargetProfiles } from '@/hooks/use-target-profiles';
 import { useTheme } from '@/theme';
 import type { GarageBike, SizingRecordSummary } from '@shared/types/garage';
 
-/** One customer's bikes and the sizing records saved for each: where a quote starts. */
+/**
+ * One customer's bikes and the sizing records saved for each: where a quote starts. For a walk-in
+ * the desk adds the bike from a shop model, weighs them in and sizes the bike from the weights.
+ */
 export default function CustomerScreen() {
   const params = useLocalSearchParams<{ id: string; name?: string }>();
   const riderId = Number(params.id);
-  const { data, error, isLoading, mutate } = useCustomerBikes(riderId);
+  const { data, error, isLoading, mutate, addBike, sizeFromWeights } = useCustomerBikes(riderId);
   return (
     <Screen>
       <TextLink href="/desk/customers">← Customers</TextLink>
@@ -31,21 +38,94 @@ export default function CustomerScreen() {
       ) : error || !data ? (
         <ErrorState title="The bikes could not be loaded" message={error?.message ?? ''} onRetry={() => void mutate()} />
       ) : data.bikes.length === 0 ? (
-        <EmptyState title="No bikes yet.">The rider adds a bike and measures it in their garage.</EmptyState>
+        <EmptyState title="No bikes yet.">Add one from a shop model below, or the rider adds one in their garage.</EmptyState>
       ) : (
-        data.bikes.map((bike) => <BikeRecords key={bike.id} bike={bike} />)
+        data.bikes.map((bike) => <BikeRecords key={bike.id} bike={bike} sizeFromWeights={sizeFromWeights} />)
       )}
+      <AddBike addBike={addBike} />
+      <CustomerWeighIn riderId={riderId} />
     </Screen>
   );
 }
 
-function BikeRecords({ bike }: { bike: GarageBike }) {
+function AddBike({ addBike }: { addBike: (modelId: number, nickname: string) => Promise<unknown> }) {
+  const models = useBikeModels();
+  return (
+    <Card testID="add-bike">
+      <ThemedText type="heading">Add a bike from a shop model</ThemedText>
+      {models.error ? (
+        <ErrorState title="The shop models could not be loaded" message={models.error.message} onRetry={() => void models.mutate()} />
+      ) : !models.data ? (
+        <LoadingState label="Loading the shop models…" />
+      ) : (
+        <AddBikeForm models={models.data.models} onAdd={addBike} />
+      )}
+    </Card>
+  );
+}
+
+/** The weights the sizing uses; a saved sizing record keeps the weigh-in it was worked from. */
+function CustomerWeighIn({ riderId }: { riderId: number }) {
+  const weighIn = useCustomerWeighIn(riderId);
+  const profiles = useTargetProfiles();
+  const [saved, setSaved] = useState(false);
+  const error = weighIn.error ?? profiles.error;
+  return (
+    <Card testID="customer-weigh-in">
+      <ThemedText type="heading">Weigh-in</ThemedText>
+      {error ? (
+        <ErrorState title="The weigh-in could not be loaded" message={error.message} onRetry={() => void Promise.all([weighIn.mutate(), profiles.mutate()])} />
+      ) : !weighIn.data || !profiles.data ? (
+        <LoadingState label="Loading the weigh-in…" />
+      ) : (
+        <WeighInForm
+          weighIn={weighIn.data.weighIn}
+          profiles={profiles.data.profiles}
+          submitLabel="Save the weigh-in"
+          onSubmit={async (value) => {
+            setSaved(false);
+            await weighIn.save(value);
+            setSaved(true);
+          }}
+        />
+      )}
+      {saved && <ThemedText role="status">Weigh-in saved.</ThemedText>}
+    </Card>
+  );
+}
+
+function BikeRecords({ bike, sizeFromWeights }: { bike: GarageBike; sizeFromWeights: (bikeId: number) => Promise<unknown> }) {
   const { spacing } = useTheme();
   const { data, error } = useBikeRecords(bike.id);
+  const [sizing, setSizing] = useState(false);
+  const [problem, setProblem] = useState<string | null>(null);
+  async function size() {
+    setSizing(true);
+    setProblem(null);
+    try {
+      await sizeFromWeights(bike.id);
+    } catch (cause) {
+      setProblem(cause instanceof Error ? cause.message : 'The bike could not be sized.');
+    } finally {
+      setSizing(false);
+    }
+  }
   return (
     <Card testID={`customer-bike-${bike.id}`}>
       <ThemedText type="heading">{bike.nickname}</ThemedText>
       {bike.model && <ThemedText color="textMuted">{bike.model.name}</ThemedText>}
+      <Button
+        label={sizing ? 'Sizing…' : 'Size from weights'}
+        variant="secondary"
+        disabled={sizing}
+        onPress={() => void size()}
+        testID={`size-from-weights-${bike.id}`}
+      />
+      {problem && (
+        <ThemedText role="alert" color="danger">
+          {problem}
+        </ThemedText>
+      )}
       {error ? (
         <ThemedText color="danger">{error.message}</ThemedText>
       ) : !data ? (

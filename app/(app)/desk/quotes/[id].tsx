@@ -104,6 +104,7 @@ export default function QuoteEditorScreen() {
           Valid until {formatDate(quote.validUntil)}
           {quote.sentAt ? ` · sent ${formatDateTime(quote.sentAt)}` : ''}
         </ThemedText>
+        <TextLink href={`/desk/quotes/${quote.id}/print`}>Print view</TextLink>
       </View>
       {problem && (
         <Card tone="danger">

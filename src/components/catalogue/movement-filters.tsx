@@ -1,8 +1,9 @@
-import { useState, type ReactNode } from 'react';
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
+import { Labelled } from '@/components/ui/labelled';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useImportBatches } from '@/hooks/use-imports';
 import { useSprings } from '@/hooks/use-springs';
@@ -139,17 +140,6 @@ function SpringPick({ search, onPick }: { search: string; onPick: (spring: { id:
   );
 }
 
-function Labelled({ label, children }: { label: string; children: ReactNode }) {
-  const { spacing } = useTheme();
-  return (
-    <View style={{ gap: spacing.xs }}>
-      <ThemedText type="caption" color="textMuted">
-        {label}
-      </ThemedText>
-      {children}
-    </View>
-  );
-}
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' },

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/ui/button';
 import { Input } from '@/components/ui/input';
+import { Labelled } from '@/components/ui/labelled';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useFamilies } from '@/hooks/use-families';
@@ -164,17 +165,6 @@ export function SpringFiltersBar({ filters, unit, onChange }: SpringFiltersBarPr
   );
 }
 
-function Labelled({ label, children }: { label: string; children: React.ReactNode }) {
-  const { spacing } = useTheme();
-  return (
-    <View style={{ gap: spacing.xs }}>
-      <ThemedText type="caption" color="textMuted">
-        {label}
-      </ThemedText>
-      {children}
-    </View>
-  );
-}
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' },

@@ -4,13 +4,14 @@ import { useState } from 'react';
 import { Form } from '@/components/form/form';
 import { FormErrorBanner } from '@/components/form/form-error-banner';
 import { SubmitButton } from '@/components/form/submit-button';
+import { NewPasswordField } from '@/components/form/new-password-field';
 import { TextField } from '@/components/form/text-field';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 import { requestPasswordReset, resetPassword } from '@/session/password-reset';
-import { PASSWORD_MIN, resetRequestSchema, resetSchema } from '@shared/schemas/auth.schema';
+import { resetRequestSchema, resetSchema } from '@shared/schemas/auth.schema';
 
 /** The form checks what the person types; the token comes from the link, and the server judges it. */
 const newPasswordSchema = resetSchema.pick(['password']);
@@ -88,13 +89,7 @@ function NewPassword({ token }: { token: string }) {
                 setDone(true);
               }}
             >
-              <TextField
-                name="password"
-                label="New password"
-                hint={`At least ${PASSWORD_MIN} characters. A few words in a row are easy to remember.`}
-                secureTextEntry
-                autoComplete="new-password"
-              />
+              <NewPasswordField label="New password" />
               <FormErrorBanner />
               <SubmitButton label="Set the new password" busyLabel="Saving…" />
             </Form>

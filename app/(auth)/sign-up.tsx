@@ -1,13 +1,14 @@
 import { Form } from '@/components/form/form';
 import { FormErrorBanner } from '@/components/form/form-error-banner';
 import { SubmitButton } from '@/components/form/submit-button';
+import { NewPasswordField } from '@/components/form/new-password-field';
 import { TextField } from '@/components/form/text-field';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useSession } from '@/session/session-provider';
-import { PASSWORD_MIN, signUpSchema } from '@shared/schemas/auth.schema';
+import { signUpSchema } from '@shared/schemas/auth.schema';
 
 /** A rider's own account; the shop's staff get theirs from the admin. */
 export default function SignUpScreen() {
@@ -34,13 +35,7 @@ export default function SignUpScreen() {
             autoCapitalize="none"
             autoCorrect={false}
           />
-          <TextField
-            name="password"
-            label="Password"
-            hint={`At least ${PASSWORD_MIN} characters. A few words in a row are easy to remember.`}
-            secureTextEntry
-            autoComplete="new-password"
-          />
+          <NewPasswordField label="Password" />
           <FormErrorBanner />
           <SubmitButton label="Create account" busyLabel="Creating your account…" />
         </Form>

@@ -1,5 +1,24 @@
-/** `npm run bench`: every figure beside a baseline measured in the same run. */
+/**
+ * `npm run bench`: every figure beside a baseline measured in the same run. Each module adds one
+ * entry to `benches`; they run one after another (never in parallel, so one does not slow the
+ * next) and the rows of all of them print as one table at the end.
+ */
 import { benchEngine } from './engine.bench';
-import { printTable } from './measure';
+import { BenchRow, printTable } from './measure';
 
-printTable([...benchEngine()]);
+type Bench = () => BenchRow[] | Promise<BenchRow[]>;
+
+const benches: Bench[] = [
+  benchEngine,
+];
+
+async function runBenches(): Promise<void> {
+  const rows: BenchRow[] = [];
+  for (const bench of benches) rows.push(...(await bench()));
+  printTable(rows);
+}
+
+runBenches().catch((error: unknown) => {
+  console.error(error);
+  process.exitCode = 1;
+});

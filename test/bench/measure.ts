@@ -37,3 +37,59 @@ export function printTable(rows: BenchRow[]): void {
   console.log(widths.map((w) => '-'.repeat(w)).join('-|-'));
   cells.forEach((c) => console.log(line(c)));
 }
+
+/** Formats a rate the way every row shows it: operations per second and the time per operation. */
+export function formatRate(rate: Rate): string {
+  return `${Math.round(rate.opsPerSecond).toLocaleString('en')}/s (${rate.microsPerOp.toFixed(1)} µs)`;
+}
+
+/**
+ * The value below which `p` percent of the samples fall (nearest-rank method, NIST/SEMATECH
+ * e-Handbook of Statistical Methods 7.2.6.2): the ceil(p/100 × n)-th smallest sample.
+ */
+export function percentile(samples: readonly number[], p: number): number {
+  if (samples.length === 0) throw new RangeError('percentile of no samples');
+  if (!(p > 0 && p <= 100)) throw new RangeError(`percentile ${p} is outside (0, 100]`);
+  const sorted = [...samples].sort((a, b) => a - b);
+  return sorted[Math.ceil((p / 100) * sorted.length) - 1];
+}
+
+export interface Latency {
+  samples: number;
+  meanMs: number;
+  p50Ms: number;
+  p90Ms: number;
+  p99Ms: number;
+  maxMs: number;
+}
+
+export function summariseLatencies(samplesMs: readonly number[]): Latency {
+  const total = samplesMs.reduce((sum, v) => sum + v, 0);
+  return {
+    samples: samplesMs.length,
+    meanMs: total / samplesMs.length,
+    p50Ms: percentile(samplesMs, 50),
+    p90Ms: percentile(samplesMs, 90),
+    p99Ms: percentile(samplesMs, 99),
+    maxMs: samplesMs.reduce((max, v) => Math.max(max, v), -Infinity),
+  };
+}
+
+/**
+ * Times each of `count` runs of a task, sync or async, one after another (after `warmup` untimed
+ * runs), and summarises the times. For operations slow enough that one run is worth timing alone.
+ */
+export async function measureLatency(task: () => unknown, count: number, warmup = 10): Promise<Latency> {
+  for (let i = 0; i < warmup; i += 1) await task();
+  const samplesMs: number[] = [];
+  for (let i = 0; i < count; i += 1) {
+    const started = performance.now();
+    await task();
+    samplesMs.push(performance.now() - started);
+  }
+  return summariseLatencies(samplesMs);
+}
+
+export function formatLatency(latency: Latency): string {
+  return `p50 ${latency.p50Ms.toFixed(2)} ms, p99 ${latency.p99Ms.toFixed(2)} ms`;
+}

@@ -2,7 +2,7 @@ import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { AuditEntity } from '../../shared/schemas/shop-data.schema';
 import type { AuditAction } from '../../shared/types/shop-data';
 
-/** One edit of the shop's data (a bike model, a target profile, an engine setting): who, when, before and after. */
+/** One edit of the shop's data (a bike model, a target profile, an engine setting, the shop settings): who, when, before and after. */
 @Entity({ name: 'audit_entry' })
 @Index('idx_audit_entry_entity', ['entity', 'id'])
 export class AuditEntry {

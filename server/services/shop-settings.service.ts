@@ -1,4 +1,5 @@
 /** The shop's terms for quotes: one row, read by every quote built, edited by the admin. */
+import { isDeepStrictEqual } from 'node:util';
 import { EntityManager } from 'typeorm';
 import type { ShopSettingsInput } from '../../shared/schemas/shop-settings.schema';
 import type { ShopIdentity, ShopSettingsView } from '../../shared/types/quote';
@@ -7,8 +8,11 @@ import { Shop } from '../entities/shop.entity';
 import { ShopSettings } from '../entities/shop-settings.entity';
 import { ConflictError } from '../errors';
 import { AuthUser } from '../middleware/auth';
+import { recordAudit } from './audit.service';
 
 const SETTINGS_ID = 1;
+/** The audit's key for the one row of terms. */
+export const SHOP_SETTINGS_AUDIT_KEY = 'quote-terms';
 
 export function toShopSettingsView(row: ShopSettings): ShopSettingsView {
   return {
@@ -35,21 +39,29 @@ export async function loadShop(manager: EntityManager): Promise<{ identity: Shop
   return { identity: { name: shop.name, address: shop.address, email: shop.email, phone: shop.phone }, currency: shop.currency };
 }
 
-export async function writeShopSettings(manager: EntityManager, input: ShopSettingsInput, updatedById: number | null, now: Date): Promise<ShopSettings> {
+/** The terms as the audit keeps them: the view without the edit's own time. */
+function termsOf(row: ShopSettings): Omit<ShopSettingsView, 'updatedAt'> {
+  const { updatedAt: _updatedAt, ...terms } = toShopSettingsView(row);
+  return terms;
+}
+
+function settingsRow(manager: EntityManager, input: ShopSettingsInput, updatedById: number | null, now: Date): ShopSettings {
   const deposit = input.deposit.kind === 'percent' ? { kind: 'percent' as const, basisPoints: input.deposit.basisPoints! } : { kind: 'fixed' as const, cents: input.deposit.cents! };
-  return manager.save(
-    manager.create(ShopSettings, {
-      id: SETTINGS_ID,
-      labourRateCentsPerHour: input.labourRateCentsPerHour,
-      taxBasisPoints: input.taxBasisPoints,
-      deposit,
-      operations: input.operations.map((o) => ({ code: o.code, label: o.label, minutes: o.minutes })),
-      quoteValidityDays: input.quoteValidityDays,
-      cautions: input.cautions,
-      updatedById,
-      updatedAt: now,
-    }),
-  );
+  return manager.create(ShopSettings, {
+    id: SETTINGS_ID,
+    labourRateCentsPerHour: input.labourRateCentsPerHour,
+    taxBasisPoints: input.taxBasisPoints,
+    deposit,
+    operations: input.operations.map((o) => ({ code: o.code, label: o.label, minutes: o.minutes })),
+    quoteValidityDays: input.quoteValidityDays,
+    cautions: input.cautions,
+    updatedById,
+    updatedAt: now,
+  });
+}
+
+export async function writeShopSettings(manager: EntityManager, input: ShopSettingsInput, updatedById: number | null, now: Date): Promise<ShopSettings> {
+  return manager.save(settingsRow(manager, input, updatedById, now));
 }
 
 export class ShopSettingsService {
@@ -59,9 +71,22 @@ export class ShopSettingsService {
     return toShopSettingsView(await loadShopSettings(this.ctx.db.read.manager));
   }
 
-  /** Quotes already made keep the rates they were made with. */
+  /**
+   * Quotes already made keep the rates they were made with. The change is audited in the same
+   * transaction, before and after as the terms read; a put that changes nothing writes nothing.
+   */
   async put(user: AuthUser, input: ShopSettingsInput): Promise<ShopSettingsView> {
-    const row = await this.ctx.db.write((manager) => writeShopSettings(manager, input, user.id, this.ctx.now()));
+    const row = await this.ctx.db.write(async (manager) => {
+      const stored = await manager.findOneBy(ShopSettings, { id: SETTINGS_ID });
+      const now = this.ctx.now();
+      const next = settingsRow(manager, input, user.id, now);
+      const before = stored ? termsOf(stored) : null;
+      const after = termsOf(next);
+      if (stored && isDeepStrictEqual(before, after)) return stored;
+      const saved = await manager.save(next);
+      await recordAudit(manager, user, now, { entity: 'shop-settings', entityKey: SHOP_SETTINGS_AUDIT_KEY, action: stored ? 'update' : 'create', before, after });
+      return saved;
+    });
     return toShopSettingsView(row);
   }
 }

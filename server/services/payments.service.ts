@@ -7,7 +7,7 @@
  */
 import Stripe from 'stripe';
 import { EntityManager } from 'typeorm';
-import type { QuoteView, ReceiptView } from '../../shared/types/quote';
+import type { QuoteStatus, QuoteView, ReceiptView } from '../../shared/types/quote';
 import { AppContext } from '../context';
 import { ServerConfig } from '../env';
 import { PaymentStandIn } from '../fakes/payment-service';
@@ -17,7 +17,8 @@ import { Quote } from '../entities/quote.entity';
 import { BadRequestError, ConflictError, HttpError, NotFoundError } from '../errors';
 import { AuthUser } from '../middleware/auth';
 import { assertOwnerOrStaff } from '../middleware/ownership';
-import { moveQuote, QuoteActor } from './quote-rules';
+import { formatCents } from './quote-mail.service';
+import { moveQuote, noteOnQuote, QuoteActor } from './quote-rules';
 import { toQuoteView, toReceipt } from './quote-view';
 
 type Intent = Stripe.PaymentIntent;
@@ -47,13 +48,26 @@ export class PaymentGateway {
     return this.client;
   }
 
+  /** Refunds the quote's kept deposit (its first): the cancel's refund. */
   async refundDeposit(manager: EntityManager, quote: Quote, amountCents: number, at: Date): Promise<void> {
-    const deposit = await manager.findOneBy(Payment, { quoteId: quote.id, kind: 'deposit' });
+    const deposit = await manager.findOne(Payment, { where: { quoteId: quote.id, kind: 'deposit' }, order: { id: 'ASC' } });
     if (!deposit) return;
-    const refund = await this.sdk().refunds.create({ payment_intent: deposit.providerId, amount: amountCents });
-    await manager.insert(Payment, { quoteId: quote.id, kind: 'refund', providerId: refund.id, amountCents, currency: quote.currency, method: deposit.method, last4: deposit.last4, at });
+    await this.refundPayment(manager, quote, deposit, amountCents, at);
+  }
+
+  /**
+   * Gives a deposit back to the card and records it (a refund row, the quote's refundedCents).
+   * The idempotency key is the deposit's: should the transaction roll back after the provider
+   * refunded, the retry gets the same refund instead of a second one.
+   */
+  async refundPayment(manager: EntityManager, quote: Quote, deposit: Payment, amountCents: number, at: Date): Promise<Payment> {
+    const refund = await this.sdk().refunds.create({ payment_intent: deposit.providerId, amount: amountCents }, { idempotencyKey: `refund-${deposit.providerId}` });
+    const row = await manager.save(
+      manager.create(Payment, { quoteId: quote.id, kind: 'refund', providerId: refund.id, amountCents, currency: quote.currency, method: deposit.method, last4: deposit.last4, at }),
+    );
     await manager.update(Quote, { id: quote.id }, { refundedCents: quote.refundedCents + amountCents });
     quote.refundedCents += amountCents;
+    return row;
   }
 
   close(): Promise<void> {
@@ -69,6 +83,13 @@ function cardDetails(intent: Intent): { method: string; last4: string | null } {
   const charge = typeof intent.latest_charge === 'object' ? intent.latest_charge : null;
   const card = charge?.payment_method_details?.card;
   return { method: charge?.payment_method_details?.type ?? 'card', last4: card?.last4 ?? null };
+}
+
+/** The pay route's answer for a card charged while the quote closed: the money is already on its way back. */
+function refundedAnswer(quote: Quote, deposit: Payment): ConflictError {
+  const amount = formatCents(deposit.amountCents, quote.currency);
+  const why = HOLDS_DEPOSIT.includes(quote.status) ? 'its deposit had already been paid' : `it was ${quote.status}`;
+  return new ConflictError(`The card was charged as quote ${quote.number} closed: ${why}, so the ${amount} went back to the card.`, 'deposit-refunded');
 }
 
 export interface DepositAnswer {
@@ -93,6 +114,7 @@ export class PaymentsService {
     if (quote.paidCents > 0) throw new ConflictError(`The deposit for quote ${quote.number} is already paid.`, 'already-paid');
     if (quote.status !== 'accepted') throw new ConflictError(`Quote ${quote.number} must be accepted before its deposit is paid.`, 'bad-status');
     if (quote.depositDueCents <= 0) throw new ConflictError(`Quote ${quote.number} needs no deposit.`, 'no-deposit');
+    if (quote.validUntil.getTime() <= this.ctx.now().getTime()) throw new ConflictError(`Quote ${quote.number} is past its validity date: ask the shop for a new one.`, 'expired');
     let intent: Intent;
     try {
       const created = await sdk.paymentIntents.create(
@@ -109,9 +131,11 @@ export class PaymentsService {
       throw err;
     }
     if (intent.status !== 'succeeded') throw new HttpError(402, 'card-not-charged', 'The card was not charged; the deposit is still due.');
-    const payment = await this.ctx.db.write((manager) => recordDeposit(manager, intent, { kind: 'payment', id: actor.id, name: actor.name }, this.ctx.now()));
+    const recorded = await this.ctx.db.write((manager) => recordDeposit(manager, gateway, intent, { kind: 'payment', id: actor.id, name: actor.name }, this.ctx.now()));
     const read = this.ctx.db.read.manager;
-    return { quote: await toQuoteView(read, await read.findOneByOrFail(Quote, { id: quoteId })), receipt: toReceipt(payment) };
+    const after = await read.findOneByOrFail(Quote, { id: quoteId });
+    if (!recorded.kept) throw refundedAnswer(after, recorded.payment);
+    return { quote: await toQuoteView(read, after), receipt: toReceipt(recorded.payment) };
   }
 
   /** A signed event from the provider; a bad signature is a 400 and changes nothing. */
@@ -129,17 +153,31 @@ export class PaymentsService {
       if (await manager.existsBy(PaymentWebhookEvent, { eventId: event.id })) return { received: true as const, duplicate: true };
       await manager.insert(PaymentWebhookEvent, { eventId: event.id, type: event.type, receivedAt: this.ctx.now() });
       if (event.type === 'payment_intent.succeeded') {
-        await recordDeposit(manager, event.data.object, { kind: 'payment', id: null, name: 'Card payment' }, this.ctx.now());
+        await recordDeposit(manager, gateway, event.data.object, { kind: 'payment', id: null, name: 'Card payment' }, this.ctx.now());
       }
       return { received: true as const, duplicate: false };
     });
   }
 }
 
-/** Records a succeeded intent as the quote's deposit, once: a second call for the same intent returns the first row. */
-async function recordDeposit(manager: EntityManager, intent: Intent, actor: QuoteActor, at: Date): Promise<Payment> {
+/** Statuses in which the quote's first deposit is the money the shop holds for it. */
+const HOLDS_DEPOSIT: readonly QuoteStatus[] = ['deposit-paid', 'booked', 'fitted'];
+
+interface RecordedDeposit {
+  payment: Payment;
+  /** False when the deposit went back to the card: the quote was closed, or already paid, when it landed. */
+  kept: boolean;
+}
+
+/**
+ * Records a succeeded intent as the quote's deposit, once: a second call for the same intent
+ * returns the first row. A deposit that lands on a quote no longer waiting for one (the desk
+ * cancelled it, or it expired, while the card was charged; or another payment paid it first) is
+ * refunded in the same transaction and noted in the quote's history, so no money is held for it.
+ */
+async function recordDeposit(manager: EntityManager, gateway: PaymentGateway, intent: Intent, actor: QuoteActor, at: Date): Promise<RecordedDeposit> {
   const existing = await manager.findOneBy(Payment, { providerId: intent.id });
-  if (existing) return existing;
+  if (existing) return { payment: existing, kept: await isKeptDeposit(manager, existing) };
   const quoteId = Number(intent.metadata?.quoteId);
   const quote = await manager.findOneBy(Quote, { id: quoteId });
   if (!quote) throw new BadRequestError('The payment names no quote of this shop.', 'unknown-quote');
@@ -148,6 +186,20 @@ async function recordDeposit(manager: EntityManager, intent: Intent, actor: Quot
     manager.create(Payment, { quoteId, kind: 'deposit', providerId: intent.id, amountCents: intent.amount, currency: quote.currency, method, last4, at }),
   );
   await manager.update(Quote, { id: quoteId }, { paidCents: quote.paidCents + intent.amount });
-  if (quote.status === 'accepted') await moveQuote(manager, quote, 'deposit-paid', actor, at, 'paid', `Deposit ${intent.amount} cents, ${intent.id}`);
-  return payment;
+  quote.paidCents += intent.amount;
+  if (quote.status === 'accepted') {
+    await moveQuote(manager, quote, 'deposit-paid', actor, at, 'paid', `Deposit ${intent.amount} cents, ${intent.id}`);
+    return { payment, kept: true };
+  }
+  const refund = await gateway.refundPayment(manager, quote, payment, intent.amount, at);
+  const why = HOLDS_DEPOSIT.includes(quote.status) ? 'after the deposit was already paid' : `after the quote was ${quote.status}`;
+  await noteOnQuote(manager, quote, actor, at, `Deposit ${intent.amount} cents, ${intent.id}, arrived ${why}: refunded, ${refund.providerId}`);
+  return { payment, kept: false };
+}
+
+async function isKeptDeposit(manager: EntityManager, deposit: Payment): Promise<boolean> {
+  const quote = await manager.findOneByOrFail(Quote, { id: deposit.quoteId });
+  if (!HOLDS_DEPOSIT.includes(quote.status)) return false;
+  const first = await manager.findOne(Payment, { where: { quoteId: quote.id, kind: 'deposit' }, order: { id: 'ASC' } });
+  return first?.id === deposit.id;
 }

@@ -1,6 +1,7 @@
 /**
  * The quote's status flow. A status changes only through `moveQuote`, which checks the move is
- * allowed and records who made it and when in quote_status_event, in the caller's transaction.
+ * allowed and records who made it and when in quote_status_event, in the caller's transaction;
+ * `noteOnQuote` records an event that leaves the status as it is.
  *
  *   draft ─send─▶ sent ─accept─▶ accepted ─pay─▶ deposit-paid ─book─▶ booked ─fit─▶ fitted
  *            sent ─decline─▶ declined      accepted ─book (no deposit due)─▶ booked
@@ -69,4 +70,9 @@ export async function moveQuote(manager: EntityManager, quote: Quote, to: QuoteS
   quote.status = to;
   quote.updatedAt = at;
   return quote;
+}
+
+/** An event in the quote's history that does not change its status (from and to are the same), for what happened to a closed quote. */
+export async function noteOnQuote(manager: EntityManager, quote: Quote, actor: QuoteActor, at: Date, note: string): Promise<void> {
+  await manager.insert(QuoteStatusEvent, { quoteId: quote.id, fromStatus: quote.status, toStatus: quote.status, actorKind: actor.kind, actorId: actor.id, actorName: actor.name, note, at });
 }

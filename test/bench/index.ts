@@ -3,6 +3,7 @@
  * entry to `benches`; they run one after another (never in parallel, so one does not slow the
  * next) and the rows of all of them print as one table at the end.
  */
+import { benchApi } from './api.bench';
 import { benchEngine } from './engine.bench';
 import { BenchRow, printTable } from './measure';
 
@@ -10,6 +11,7 @@ type Bench = () => BenchRow[] | Promise<BenchRow[]>;
 
 const benches: Bench[] = [
   benchEngine,
+  benchApi,
 ];
 
 async function runBenches(): Promise<void> {

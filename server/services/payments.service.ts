@@ -3,7 +3,8 @@
  * STRIPE_WEBHOOK_SECRET) the SDK talks to the provider; outside production without them it talks
  * to the local stand-in (server/fakes/payment-service.ts) with generated test keys. A deposit is
  * recorded once per payment intent, whether the pay route or the signed webhook sees it first;
- * webhook events are also kept by id, so a repeated delivery changes nothing.
+ * webhook events are also kept by id, so a repeated delivery changes nothing. A deposit that
+ * lands on a quote already cancelled, expired or paid is refunded as it is recorded.
  */
 import Stripe from 'stripe';
 import { EntityManager } from 'typeorm';

@@ -3,6 +3,7 @@ import useSWR, { useSWRConfig } from 'swr';
 import { api, type ApiError } from '@/api/client';
 import { deskKeys, riderKeys } from '@/api/keys';
 import type { GarageBike, SizingRecord, WeighIn, WeighInAnswer } from '@shared/types/garage';
+import type { EndKind, Readings } from '@shared/types/sizing';
 import type { CustomerSummary } from '@shared/types/quote';
 
 type CustomerPage = { customers: CustomerSummary[]; total: number; page: number; pageSize: number };
@@ -36,7 +37,14 @@ export function useCustomerBikes(riderId: number) {
     await mutate(riderKeys.bikeRecords(bikeId));
     return record;
   }
-  return { ...swr, addBike, sizeFromWeights };
+  /** The bike is in the shop: the ends measured are sized from their readings and the weigh-in. */
+  async function sizeFromReadings(bikeId: number, readings: Partial<Record<EndKind, Readings>>) {
+    const ends = (['front', 'rear'] as const).filter((end) => readings[end] !== undefined);
+    const { record } = await api.post<{ record: SizingRecord }>(riderKeys.bikeRecords(bikeId), { ends, readings });
+    await Promise.all([mutate(riderKeys.bikeRecords(bikeId)), mutate(riderKeys.setupLog(bikeId)), swr.mutate()]);
+    return record;
+  }
+  return { ...swr, addBike, sizeFromWeights, sizeFromReadings };
 }
 
 /** A customer's weigh-in as the desk reads and keeps it for them. */

@@ -28,7 +28,8 @@ const MODES = [
   { value: 'single', label: 'One reading' },
 ] as const;
 
-function ReadingInput({ name, label, error, testID }: { name: keyof ReadingTexts; label: string; error?: string; testID: string }) {
+/** One length box; `name` is the Formik path of its text, so a form with several readings can use it too. */
+export function ReadingInput({ name, label, error, testID }: { name: string; label: string; error?: string; testID: string }) {
   const [field, meta, helpers] = useField<string>(name);
   // Checked as typed: a wrong value shows at once, an empty box only once the person moved on.
   const shown = field.value !== '' || meta.touched ? error : undefined;

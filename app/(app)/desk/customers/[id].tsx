@@ -1,4 +1,4 @@
-import { router, useLocalSearchParams } from 'expo-router';
+import { Link, router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -23,7 +23,8 @@ import type { GarageBike, SizingRecordSummary } from '@shared/types/garage';
 
 /**
  * One customer's bikes and the sizing records saved for each: where a quote starts. For a walk-in
- * the desk adds the bike from a shop model, weighs them in and sizes the bike from the weights.
+ * the desk adds the bike from a shop model and weighs them in; a bike not in yet is sized from the
+ * weights, one on the bench from the readings the desk takes.
  */
 export default function CustomerScreen() {
   const params = useLocalSearchParams<{ id: string; name?: string }>();
@@ -40,7 +41,9 @@ export default function CustomerScreen() {
       ) : data.bikes.length === 0 ? (
         <EmptyState title="No bikes yet.">Add one from a shop model below, or the rider adds one in their garage.</EmptyState>
       ) : (
-        data.bikes.map((bike) => <BikeRecords key={bike.id} bike={bike} sizeFromWeights={sizeFromWeights} />)
+        data.bikes.map((bike) => (
+          <BikeRecords key={bike.id} bike={bike} riderId={riderId} customerName={params.name} sizeFromWeights={sizeFromWeights} />
+        ))
       )}
       <AddBike addBike={addBike} />
       <CustomerWeighIn riderId={riderId} />
@@ -94,7 +97,14 @@ function CustomerWeighIn({ riderId }: { riderId: number }) {
   );
 }
 
-function BikeRecords({ bike, sizeFromWeights }: { bike: GarageBike; sizeFromWeights: (bikeId: number) => Promise<unknown> }) {
+type BikeRecordsProps = {
+  bike: GarageBike;
+  riderId: number;
+  customerName: string | undefined;
+  sizeFromWeights: (bikeId: number) => Promise<unknown>;
+};
+
+function BikeRecords({ bike, riderId, customerName, sizeFromWeights }: BikeRecordsProps) {
   const { spacing } = useTheme();
   const { data, error } = useBikeRecords(bike.id);
   const [sizing, setSizing] = useState(false);
@@ -114,13 +124,24 @@ function BikeRecords({ bike, sizeFromWeights }: { bike: GarageBike; sizeFromWeig
     <Card testID={`customer-bike-${bike.id}`}>
       <ThemedText type="heading">{bike.nickname}</ThemedText>
       {bike.model && <ThemedText color="textMuted">{bike.model.name}</ThemedText>}
-      <Button
-        label={sizing ? 'Sizing…' : 'Size from weights'}
-        variant="secondary"
-        disabled={sizing}
-        onPress={() => void size()}
-        testID={`size-from-weights-${bike.id}`}
-      />
+      <View style={[styles.row, { gap: spacing.sm }]}>
+        <Link
+          href={{
+            pathname: '/desk/customers/[id]/readings/[bikeId]',
+            params: { id: String(riderId), bikeId: String(bike.id), ...(customerName && { name: customerName }) },
+          }}
+          asChild
+        >
+          <Button label="Size from readings" testID={`size-from-readings-${bike.id}`} />
+        </Link>
+        <Button
+          label={sizing ? 'Sizing…' : 'Size from weights'}
+          variant="secondary"
+          disabled={sizing}
+          onPress={() => void size()}
+          testID={`size-from-weights-${bike.id}`}
+        />
+      </View>
       {problem && (
         <ThemedText role="alert" color="danger">
           {problem}

@@ -7,6 +7,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { formatMoney } from '@/components/catalogue/money';
+import { FittingPicker } from '@/components/quotes/fitting-picker';
 import { LineEditor } from '@/components/quotes/line-editor';
 import { QuoteHistory } from '@/components/quotes/quote-history';
 import { QuoteLines } from '@/components/quotes/quote-lines';
@@ -16,7 +17,6 @@ import { StatusBadge } from '@/components/quotes/status-badge';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ErrorState } from '@/components/ui/error-state';
-import { Input } from '@/components/ui/input';
 import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
@@ -147,22 +147,16 @@ type ActionsProps = {
 /** The next steps the status allows, and nothing else. */
 function Actions({ quote, busy, run, changes }: ActionsProps) {
   const { spacing } = useTheme();
-  const [day, setDay] = useState(quote.fittingAt ? quote.fittingAt.slice(0, 10) : '');
-  const [time, setTime] = useState('09:00');
-  const [bookError, setBookError] = useState<string | null>(null);
+  const [fittingAt, setFittingAt] = useState<string | null>(quote.fittingAt);
   const bookable =
     quote.status === 'deposit-paid' ||
     quote.status === 'booked' ||
     (quote.status === 'accepted' && quote.depositDueCents === 0);
+  const moved = fittingAt !== null && fittingAt !== quote.fittingAt;
 
   function book() {
-    const at = new Date(`${day}T${time}`);
-    if (!/^\d{4}-\d{2}-\d{2}$/.test(day) || !/^\d{2}:\d{2}$/.test(time) || Number.isNaN(at.getTime())) {
-      setBookError('Give the day as YYYY-MM-DD and the time as HH:MM.');
-      return;
-    }
-    setBookError(null);
-    void run(() => changes.book(at.toISOString()), (next) => `Fitting booked for ${formatDateTime(next.fittingAt!)}.`);
+    if (!fittingAt) return;
+    void run(() => changes.book(fittingAt), (next) => `Fitting booked for ${formatDateTime(next.fittingAt!)}.`);
   }
 
   return (
@@ -181,15 +175,17 @@ function Actions({ quote, busy, run, changes }: ActionsProps) {
       )}
       {bookable && (
         <View style={{ gap: spacing.sm }}>
-          <ThemedText type="label">{quote.status === 'booked' ? 'Move the fitting' : 'Book the fitting'}</ThemedText>
-          <Input accessibilityLabel="Fitting day (YYYY-MM-DD)" placeholder="YYYY-MM-DD" value={day} onChangeText={setDay} />
-          <Input accessibilityLabel="Fitting time (HH:MM)" placeholder="HH:MM" value={time} onChangeText={setTime} />
-          {bookError && (
-            <ThemedText role="alert" color="danger">
-              {bookError}
-            </ThemedText>
-          )}
-          <Button label="Book" disabled={busy} onPress={book} />
+          <ThemedText type="label">{quote.status === 'booked' ? 'Another day or time' : 'Fitting day and time'}</ThemedText>
+          <FittingPicker value={fittingAt} onChange={setFittingAt} disabled={busy} />
+          <ThemedText testID="fitting-choice">
+            {fittingAt ? `Chosen: ${formatDateTime(fittingAt)}` : 'Choose a day, then a time.'}
+          </ThemedText>
+          <Button
+            label={quote.status === 'booked' ? 'Move the fitting' : 'Book the fitting'}
+            disabled={busy || !moved}
+            onPress={book}
+            testID="book-fitting"
+          />
         </View>
       )}
       {quote.status === 'booked' && (

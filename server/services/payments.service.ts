@@ -89,8 +89,10 @@ function cardDetails(intent: Intent): { method: string; last4: string | null } {
 /** The pay route's answer for a card charged while the quote closed: the money is already on its way back. */
 function refundedAnswer(quote: Quote, deposit: Payment): ConflictError {
   const amount = formatCents(deposit.amountCents, quote.currency);
-  const why = HOLDS_DEPOSIT.includes(quote.status) ? 'its deposit had already been paid' : `it was ${quote.status}`;
-  return new ConflictError(`The card was charged as quote ${quote.number} closed: ${why}, so the ${amount} went back to the card.`, 'deposit-refunded');
+  const message = HOLDS_DEPOSIT.includes(quote.status)
+    ? `The deposit for quote ${quote.number} had already been paid, so this payment of ${amount} has gone back to the card.`
+    : `Quote ${quote.number} was ${quote.status} while the card was being charged, so the ${amount} has gone back to the card.`;
+  return new ConflictError(message, 'deposit-refunded');
 }
 
 export interface DepositAnswer {

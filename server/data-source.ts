@@ -8,6 +8,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import { DataSource, DataSourceOptions, EntityManager } from 'typeorm';
+import { beginTransactionsImmediately } from './db/immediate-transactions';
 import { WriteQueue } from './db/write-queue';
 import { entities } from './entities';
 import { readConfig } from './env';
@@ -51,6 +52,7 @@ export class Database {
     const file = path.join(dataDir, DATABASE_FILE);
     const writer = new DataSource(dataSourceOptions(file));
     await writer.initialize();
+    beginTransactionsImmediately(writer);
     await writer.runMigrations({ transaction: 'each' });
     const reader = new DataSource(dataSourceOptions(file, true));
     await reader.initialize();

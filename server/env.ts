@@ -21,6 +21,13 @@ export interface RateLimits {
 
 const MINUTE = 60_000;
 
+/**
+ * Points inside a write transaction where a reliability test may hold it open
+ * (SAGWRIGHT_FAULT_PAUSE), to kill the process between the writes and the commit.
+ */
+export const FAULT_POINTS = ['import-written', 'quote-accept-written'] as const;
+export type FaultPoint = (typeof FAULT_POINTS)[number];
+
 export const DEFAULT_RATE_LIMITS: RateLimits = {
   signIn: { limit: 10, windowMs: 15 * MINUTE },
   signUp: { limit: 5, windowMs: 60 * MINUTE },
@@ -60,6 +67,8 @@ export interface ServerConfig {
    * browser drops a Secure cookie over the plain HTTP of a shop's local network.
    */
   secureCookies: boolean;
+  /** Test only, refused in production: the write transaction that reaches this point never commits. */
+  faultPause?: FaultPoint;
 }
 
 const root = path.resolve(__dirname, '..');
@@ -109,6 +118,14 @@ function readPaymentKeys(env: Record<string, string | undefined>): PaymentKeys |
   return { secretKey, webhookSecret };
 }
 
+function readFaultPause(raw: string | undefined, production: boolean): FaultPoint | undefined {
+  if (raw === undefined || raw === '') return undefined;
+  if (production) throw new Error('SAGWRIGHT_FAULT_PAUSE holds writes open for reliability tests and is refused in production');
+  const point = FAULT_POINTS.find((p) => p === raw);
+  if (!point) throw new Error(`SAGWRIGHT_FAULT_PAUSE must be one of ${FAULT_POINTS.join(', ')}, not "${raw}"`);
+  return point;
+}
+
 export function readConfig(env: Record<string, string | undefined> = process.env): ServerConfig {
   const production = env.NODE_ENV === 'production';
   const publicUrl = readPublicUrl(env.SAGWRIGHT_PUBLIC_URL);
@@ -129,5 +146,6 @@ export function readConfig(env: Record<string, string | undefined> = process.env
     payments: readPaymentKeys(env),
     rateLimits: DEFAULT_RATE_LIMITS,
     secureCookies: env.SAGWRIGHT_SECURE_COOKIES ? env.SAGWRIGHT_SECURE_COOKIES === '1' : publicUrl?.startsWith('https:') === true,
+    faultPause: readFaultPause(env.SAGWRIGHT_FAULT_PAUSE, production),
   };
 }

@@ -35,6 +35,7 @@ import {
 } from '../../shared/types/catalogue';
 import { parseUserNumber, toSi, type RateUnit } from '../../shared/units';
 import { AppContext } from '../context';
+import { pauseForFault } from '../db/fault-pause';
 import { ImportBatch } from '../entities/import-batch.entity';
 import { User } from '../entities/user.entity';
 import { BadRequestError, ConflictError, HttpError, NotFoundError } from '../errors';
@@ -505,6 +506,7 @@ export class CatalogueImportService {
         importBatchId: batch.id,
       });
       this.ctx.sizingData.invalidate();
+      await pauseForFault('import-written', `import ${batch.id}`);
       const user = await manager.findOne(User, { select: { id: true, name: true }, where: { id: userId } });
       return { batch: toImportBatchView(batch, user), counts: plan.counts };
     });

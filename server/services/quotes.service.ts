@@ -15,6 +15,7 @@ import type { QuotePage, QuoteStatus, QuoteView, SpringOption } from '../../shar
 import type { SetupChangeInput } from '../../shared/types/setup-log';
 import type { CandidateResult, EndKind } from '../../shared/types/sizing';
 import { AppContext } from '../context';
+import { pauseForFault } from '../db/fault-pause';
 import { Bike } from '../entities/bike.entity';
 import { QuoteLine } from '../entities/quote-line.entity';
 import { QuoteStatusEvent } from '../entities/quote-status-event.entity';
@@ -376,6 +377,7 @@ export class QuotesService {
           .catch((err) => asUnavailable(err, line.sku));
       }
       await moveQuote(manager, quote, 'accepted', actor, this.ctx.now(), 'accepted');
+      await pauseForFault('quote-accept-written', quote.number);
     });
     return this.getForLink(id);
   }

@@ -11,6 +11,8 @@ export interface RunningServer {
   dataDir: string;
   output: () => string;
   stop: () => Promise<void>;
+  /** SIGKILL: no shutdown handler runs, as when the power fails. */
+  kill: () => Promise<void>;
 }
 
 export async function startServer(env: Record<string, string> = {}): Promise<RunningServer> {
@@ -40,15 +42,18 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
     });
   });
 
+  const signal = (name: NodeJS.Signals) =>
+    new Promise<void>((resolve) => {
+      if (child.exitCode !== null || child.signalCode !== null) return resolve();
+      child.once('exit', () => resolve());
+      child.kill(name);
+    });
+
   return {
     url,
     dataDir,
     output: () => output,
-    stop: () =>
-      new Promise((resolve) => {
-        if (child.exitCode !== null) return resolve();
-        child.once('exit', () => resolve());
-        child.kill('SIGTERM');
-      }),
+    stop: () => signal('SIGTERM'),
+    kill: () => signal('SIGKILL'),
   };
 }

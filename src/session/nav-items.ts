@@ -32,8 +32,17 @@ export const SIGNED_OUT_ITEMS: readonly NavItem[] = [
 ];
 
 /** `null` while nobody is signed in. */
+/** What a group of items is called when a person reaches more than one area. */
+const AREA_NAMES: Record<Area, string> = {
+  rider: 'Garage',
+  desk: 'Service desk',
+  counter: 'Parts counter',
+  admin: 'Shop admin',
+};
+
 export function navItemsFor(role: Role | null): readonly NavItem[] {
   if (!role) return SIGNED_OUT_ITEMS;
   const areas = [role, ...AREAS.filter((area) => area !== role && mayEnter(role, area))];
-  return areas.flatMap((area) => AREA_ITEMS[area]);
+  if (areas.length === 1) return AREA_ITEMS[role];
+  return areas.flatMap((area) => AREA_ITEMS[area].map((item) => ({ ...item, group: AREA_NAMES[area] })));
 }

@@ -20,7 +20,7 @@ const AREAS = {
   rider: { heading: 'Garage', nav: ['Garage'] },
   desk: { heading: 'Quotes', nav: ['Quotes', 'Customers'] },
   counter: { heading: 'Spring catalogue', nav: ['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
-  admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Shop data', 'Quotes', 'Customers', 'Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
+  admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Shop data', 'Service desk', 'Parts counter'] },
 } as const;
 
 const rider = DEMO_ACCOUNTS.find((account) => account.role === 'rider')!;

@@ -10,7 +10,12 @@ import { ThemedText } from './themed-text';
 export type NavItem = {
   href: Extract<Href, string>;
   label: string;
+  /** The area it belongs to, e.g. "Parts counter"; consecutive items of one area form a group. */
+  group?: string;
 };
+
+/** Consecutive items of one group; `group` is undefined for items given without one. */
+export type NavSection = { group: string | undefined; items: NavItem[] };
 
 /** The signed-in person, as the frame shows them. */
 export type FrameAccount = {
@@ -42,6 +47,33 @@ export function currentHref(items: readonly NavItem[], pathname: string): string
     .reduce<string | undefined>((best, item) => (!best || item.href.length > best.length ? item.href : best), undefined);
 }
 
+export function navSections(items: readonly NavItem[]): NavSection[] {
+  const sections: NavSection[] = [];
+  for (const item of items) {
+    const last = sections.at(-1);
+    if (last && last.group === item.group) last.items.push(item);
+    else sections.push({ group: item.group, items: [item] });
+  }
+  return sections;
+}
+
+/**
+ * What the navigation shows. With one group every item. With several (an admin reaches the
+ * shop, the desk and the counter: a dozen links, more than a laptop's side column holds) only
+ * the group being worked in opens to its items, the first group when none is; each other group
+ * is one link, named after it, to its first item.
+ */
+export function visibleNav(items: readonly NavItem[], current: string | undefined): { open: NavSection; closed: NavItem[] }[] {
+  const sections = navSections(items);
+  if (sections.length < 2) return sections.map((open) => ({ open, closed: [] }));
+  const openIndex = Math.max(0, sections.findIndex((section) => section.items.some((item) => item.href === current)));
+  return sections.map((section, index) =>
+    index === openIndex
+      ? { open: section, closed: [] }
+      : { open: { group: undefined, items: [] }, closed: [{ href: section.items[0].href, label: section.group ?? section.items[0].label }] },
+  );
+}
+
 /**
  * The frame around every screen: a side column of navigation on wide windows, a compact top bar
  * over a row of links on phones. The signed-in person's name and the sign-out sit in the side
@@ -51,9 +83,21 @@ export function AppFrame({ items, account, children }: AppFrameProps) {
   const { isWide } = useLayout();
   const { colors, sizes, spacing } = useTheme();
   const current = currentHref(items, usePathname());
-  const links = items.map((item) => (
-    <NavLink key={item.href} item={item} current={item.href === current} placement={isWide ? 'side' : 'top'} />
-  ));
+  const placement: Placement = isWide ? 'side' : 'top';
+  const grouped = navSections(items).length > 1;
+  const links = visibleNav(items, current).flatMap(({ open, closed }) => [
+    ...(grouped && open.group && isWide
+      ? [
+          <ThemedText key={`group-${open.group}`} type="caption" color="onChromeMuted" style={{ paddingHorizontal: spacing.md, paddingTop: spacing.sm }}>
+            {open.group}
+          </ThemedText>,
+        ]
+      : []),
+    ...open.items.map((item) => (
+      <NavLink key={item.href} item={item} current={item.href === current} placement={placement} nested={grouped && isWide} />
+    )),
+    ...closed.map((item) => <NavLink key={`closed-${item.href}`} item={item} current={false} placement={placement} />),
+  ]);
 
   if (isWide) {
     return (
@@ -226,12 +270,12 @@ function SignOutButton({ label, ...rest }: PressableProps & { label: string }) {
   );
 }
 
-type NavLinkProps = { item: NavItem; current: boolean; placement: Placement };
+type NavLinkProps = { item: NavItem; current: boolean; placement: Placement; nested?: boolean };
 
-function NavLink({ item, current, placement }: NavLinkProps) {
+function NavLink({ item, current, placement, nested = false }: NavLinkProps) {
   return (
     <Link href={item.href} asChild>
-      <NavPressable label={item.label} current={current} placement={placement} />
+      <NavPressable label={item.label} current={current} placement={placement} nested={nested} />
     </Link>
   );
 }
@@ -246,9 +290,11 @@ type NavPressableProps = PressableProps & {
   label: string;
   current: boolean;
   placement: Placement;
+  /** An item under its group's heading, indented beneath it. */
+  nested: boolean;
 };
 
-function NavPressable({ label, current, placement, ...rest }: NavPressableProps) {
+function NavPressable({ label, current, placement, nested, ...rest }: NavPressableProps) {
   const { colors, radii, spacing, sizes } = useTheme();
   return (
     <Pressable
@@ -260,7 +306,7 @@ function NavPressable({ label, current, placement, ...rest }: NavPressableProps)
               styles.sideLink,
               {
                 minHeight: sizes.touchTarget,
-                paddingHorizontal: spacing.md,
+                paddingHorizontal: nested ? spacing.lg : spacing.md,
                 borderRadius: radii.sm,
                 borderLeftColor: current ? colors.chromeAccent : 'transparent',
                 backgroundColor: current || pressed ? colors.chromeRaised : 'transparent',

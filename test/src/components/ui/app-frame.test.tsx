@@ -2,7 +2,7 @@ import { Slot } from 'expo-router';
 import { fireEvent, renderRouter, screen, within } from 'expo-router/testing-library';
 import { Text } from 'react-native';
 
-import { AppFrame, currentHref, isCurrent, type FrameAccount, type NavItem } from '@/components/ui/app-frame';
+import { AppFrame, currentHref, isCurrent, visibleNav, type FrameAccount, type NavItem } from '@/components/ui/app-frame';
 import { colors } from '@/theme';
 
 let mockIsWide = true;
@@ -16,11 +16,11 @@ const ITEMS: readonly NavItem[] = [
   { href: '/desk', label: 'Quotes' },
 ];
 
-function renderFrame(initialUrl: string, account?: FrameAccount) {
+function renderFrame(initialUrl: string, account?: FrameAccount, items: readonly NavItem[] = ITEMS) {
   return renderRouter(
     {
       _layout: () => (
-        <AppFrame items={ITEMS} account={account}>
+        <AppFrame items={items} account={account}>
           <Slot />
         </AppFrame>
       ),
@@ -65,6 +65,32 @@ describe('currentHref', () => {
   });
 });
 
+const GROUPED: readonly NavItem[] = [
+  { href: '/admin', label: 'Shop', group: 'Shop admin' },
+  { href: '/admin/users', label: 'Users', group: 'Shop admin' },
+  { href: '/desk', label: 'Quotes', group: 'Service desk' },
+  { href: '/desk/customers', label: 'Customers', group: 'Service desk' },
+];
+
+/** Per section: its open items' labels, or the one link a closed group becomes. */
+const shown = (current: string | undefined) =>
+  visibleNav(GROUPED, current).map(({ open, closed }) => [...open.items, ...closed].map((item) => `${item.label} ${item.href}`));
+
+describe('visibleNav', () => {
+  it('opens the group that holds the current page and folds each other group into one link to its first page', () => {
+    expect(shown('/desk/customers')).toEqual([['Shop admin /admin'], ['Quotes /desk', 'Customers /desk/customers']]);
+    expect(shown('/admin/users')).toEqual([['Shop /admin', 'Users /admin/users'], ['Service desk /desk']]);
+  });
+
+  it('opens the first group when no page of any is current', () => {
+    expect(shown(undefined)).toEqual([['Shop /admin', 'Users /admin/users'], ['Service desk /desk']]);
+  });
+
+  it('shows every item when there are no groups', () => {
+    expect(visibleNav(ITEMS, '/desk').flatMap(({ open, closed }) => [...open.items, ...closed])).toEqual(ITEMS);
+  });
+});
+
 describe('AppFrame', () => {
   afterEach(() => {
     // Here rather than at the top level so it runs before RNTL's cleanup: renderRouter
@@ -85,6 +111,17 @@ describe('AppFrame', () => {
       ['Quotes', '/desk'],
     ]);
     expect(screen.getByTestId('app-main')).toHaveTextContent('Shop page');
+  });
+
+  it('with groups, heads the open group in the side column and links the others by their names', () => {
+    renderFrame('/admin/users', undefined, GROUPED);
+    expect(navLinks()).toEqual([
+      ['Shop', '/admin'],
+      ['Users', '/admin/users'],
+      ['Service desk', '/desk'],
+    ]);
+    expect(within(screen.getByTestId('app-navigation')).getByText('Shop admin')).toBeOnTheScreen();
+    expect(navLabel('Users')).toHaveStyle({ color: colors.onChrome });
   });
 
   it('marks one section as current: the deepest that holds the page', () => {

@@ -13,6 +13,9 @@ import { as } from '../rider/helpers';
 import { makeTestContext, TestContext } from '../test-context';
 import { centsFields, createQuote, DeskShop, fullSwapLines, listen, sendQuote, setUpDeskShop } from './helpers';
 
+// Accounts hashed with argon2, sizings and the card stand-in: slow on a busy machine.
+jest.setTimeout(60_000);
+
 let t: TestContext;
 let shop: DeskShop;
 let server: { base: string; close: () => Promise<void> };
@@ -162,4 +165,21 @@ test('a sent quote expires by itself, recorded as the system at its time, with n
   expect(expired).toMatchObject({ from: 'sent', to: 'expired', actor: { kind: 'system', id: null } });
   expect(Date.parse(expired.at)).toBeGreaterThanOrEqual(listedAt);
   expect(await Promise.all([spring(shop.forkSpring.id), spring(shop.shockSpring.id)])).toEqual(before);
+});
+
+test('an acceptance short of one spring reserves none of them and leaves the quote sent', async () => {
+  const shock = await spring(shop.shockSpring.id);
+  const tooMany = shock.onHand - shock.reserved + 1;
+  const quote = await createQuote(shop, [
+    { kind: 'spring', springId: shop.forkSpring.id, end: 'front', quantity: 2 },
+    { kind: 'spring', springId: shop.shockSpring.id, end: 'rear', quantity: tooMany },
+  ]);
+  const { token } = await sendQuote(t, shop, quote.id);
+  const fork = await spring(shop.forkSpring.id);
+  const refused = await request(t.app).post(`/api/customer-quotes/${token}/accept`).expect(409);
+  expect(refused.body.error.code).toBe('out-of-stock');
+  expect(refused.body.error.message).toContain(shop.shockSpring.sku);
+  expect(await spring(shop.forkSpring.id)).toEqual(fork);
+  expect(await spring(shop.shockSpring.id)).toEqual(shock);
+  expect((await shop.asDesk.get(`/quotes/${quote.id}`).expect(200)).body.quote.status).toBe('sent');
 });

@@ -15,6 +15,9 @@ import { as } from '../rider/helpers';
 import { makeTestContext, TestContext } from '../test-context';
 import { createQuote, DeskShop, sendQuote, setUpDeskShop } from './helpers';
 
+// Accounts hashed with argon2, sizings and the card stand-in: slow on a busy machine.
+jest.setTimeout(60_000);
+
 let t: TestContext;
 let shop: DeskShop;
 let sdk: Stripe;

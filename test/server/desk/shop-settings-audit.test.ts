@@ -17,6 +17,9 @@ import { as } from '../rider/helpers';
 import { makeTestContext, tempDir, TestContext } from '../test-context';
 import { TEST_SETTINGS } from './helpers';
 
+// Accounts hashed with argon2, sizings and the card stand-in: slow on a busy machine.
+jest.setTimeout(60_000);
+
 const insertAudit = (source: { query: DataSource['query'] }, entity: string, key: string) =>
   source.query(`INSERT INTO "audit_entry" ("at", "actorName", "entity", "entityKey", "action", "before", "after") VALUES ('2026-12-01 10:00:00', 'Admin', ?, ?, 'update', '{"a":1}', '{"a":2}')`, [entity, key]);
 

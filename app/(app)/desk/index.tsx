@@ -53,14 +53,16 @@ export default function QuoteBoardScreen() {
           {closed.length > 0 && (
             <View style={{ gap: spacing.sm }}>
               <ThemedText type="heading">Closed</ThemedText>
-              {closed.map((quote) => (
-                <View key={quote.id} style={{ gap: spacing.xxs }}>
-                  <ThemedText type="caption" color="textMuted">
-                    {STATUS_LABELS[quote.status]}
-                  </ThemedText>
-                  <QuoteCard quote={quote} />
-                </View>
-              ))}
+              <View style={[styles.closed, { gap: spacing.sm }]}>
+                {closed.map((quote) => (
+                  <View key={quote.id} style={[styles.closedCard, { gap: spacing.xxs }]}>
+                    <ThemedText type="caption" color="textMuted">
+                      {STATUS_LABELS[quote.status]}
+                    </ThemedText>
+                    <QuoteCard quote={quote} />
+                  </View>
+                ))}
+              </View>
             </View>
           )}
         </>
@@ -84,4 +86,7 @@ export default function QuoteBoardScreen() {
 
 const styles = StyleSheet.create({
   header: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between' },
+  // As wide as a board column, so a closed quote reads like the open ones.
+  closed: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start' },
+  closedCard: { width: 200 },
 });

@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { ReadingInput } from '@/components/flow/reading-step';
 import { SagDiagram } from '@/components/flow/sag-diagram';
-import { MARKS, STAGE_TEXTS, type Stage } from '@/components/flow/step-texts';
+import { MARKS, type Stage } from '@/components/flow/step-texts';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SegmentedChoice } from '@/components/ui/segmented-choice';
@@ -16,6 +16,13 @@ import { useLayout, useTheme } from '@/theme';
 import { checkShopReadings, emptyShopReadings, shopReadingsFrom, STAGES, type ShopReadingTexts } from './shop-readings';
 
 const END_NAMES: Record<EndKind, string> = { front: 'Fork', rear: 'Shock' };
+
+/** The flow's step titles speak to the rider ("with you aboard"); at the desk the rider is the customer. */
+const STAGE_NAMES: Record<Stage, string> = {
+  extended: 'fully extended',
+  static: 'on its wheels, no rider',
+  rider: 'with the rider aboard',
+};
 
 const MODES = [
   { value: 'pair', label: 'Pushed and lifted' },
@@ -155,7 +162,7 @@ type StageReadingProps = {
 function StageReading({ end, stage, units, mode, errors, setFieldValue }: StageReadingProps) {
   const path = `texts.${end}.${stage}`;
   const error = (key: string): string | undefined => getIn(errors, `${path}.${key}`);
-  const title = STAGE_TEXTS[stage][end].title;
+  const title = `${END_NAMES[end]} ${STAGE_NAMES[stage]}`;
   const id = (key: string) => `reading-${end}-${stage}-${key}`;
   return (
     <>

@@ -13,13 +13,15 @@ import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
+import { formatQuantity } from '@/components/units/format';
 import { useBikeModels } from '@/hooks/use-bike-models';
 import { useCustomerBikes, useCustomerWeighIn } from '@/hooks/use-customers';
 import { createQuote } from '@/hooks/use-quote';
 import { useBikeRecords } from '@/hooks/use-sizing-records';
 import { useTargetProfiles } from '@/hooks/use-target-profiles';
+import { useUnits } from '@/hooks/use-units';
 import { useTheme } from '@/theme';
-import type { GarageBike, SizingRecordSummary } from '@shared/types/garage';
+import type { DisplayUnits, GarageBike, SizingRecordSummary } from '@shared/types/garage';
 
 /**
  * One customer's bikes and the sizing records saved for each: where a quote starts. For a walk-in
@@ -164,14 +166,16 @@ function BikeRecords({ bike, riderId, customerName, sizeFromWeights }: BikeRecor
   );
 }
 
-function describeEnd(label: string, end: SizingRecordSummary['front']): string | null {
+function describeEnd(label: string, end: SizingRecordSummary['front'], units: DisplayUnits): string | null {
   if (!end) return null;
-  const best = end.bestRateNmm === null ? '' : `, best ${end.bestRateNmm} N/mm`;
-  return `${label}: installed ${end.installedRateNmm} N/mm${best}`;
+  const rate = (nmm: number) => formatQuantity(nmm, 'rate', units);
+  const best = end.bestRateNmm === null ? '' : `, best ${rate(end.bestRateNmm)}`;
+  return `${label}: installed ${rate(end.installedRateNmm)}${best}`;
 }
 
 function RecordRow({ record }: { record: SizingRecordSummary }) {
   const { spacing } = useTheme();
+  const { units } = useUnits();
   const [making, setMaking] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   async function make() {
@@ -186,7 +190,7 @@ function RecordRow({ record }: { record: SizingRecordSummary }) {
       setMaking(false);
     }
   }
-  const ends = [describeEnd('Fork', record.front), describeEnd('Shock', record.rear)].filter(Boolean).join(' · ');
+  const ends = [describeEnd('Fork', record.front, units), describeEnd('Shock', record.rear, units)].filter(Boolean).join(' · ');
   return (
     <View role="listitem" style={[styles.row, { gap: spacing.md }]} testID={`sizing-record-${record.id}`}>
       <View style={styles.grow}>

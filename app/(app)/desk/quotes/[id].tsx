@@ -205,6 +205,16 @@ function Actions({ quote, busy, run, changes }: ActionsProps) {
           Fitted. Balance due: {formatMoney(quote.balanceDueCents, quote.currency)}
         </ThemedText>
       )}
+      {quote.status === 'cancelled' && (
+        <ThemedText testID="closed-note">
+          {quote.refundedCents > 0
+            ? `Cancelled. The deposit of ${formatMoney(quote.refundedCents, quote.currency)} went back to the customer's card.`
+            : 'Cancelled. Nothing is reserved for it any more.'}
+        </ThemedText>
+      )}
+      {quote.status === 'declined' && <ThemedText testID="closed-note">The customer declined. Revise it to offer another version.</ThemedText>}
+      {quote.status === 'expired' && <ThemedText testID="closed-note">Expired unanswered. Revise it to send it again.</ThemedText>}
+      {quote.status === 'superseded' && <ThemedText testID="closed-note">Replaced by a newer version.</ThemedText>}
       {REVISABLE.includes(quote.status) && (
         <Button variant="secondary" label="Revise (new version)" disabled={busy} onPress={() => void run(changes.revise)} />
       )}

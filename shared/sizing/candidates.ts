@@ -44,19 +44,48 @@ export function rankCandidates(
     if (problem?.kind === 'coil-bind') coilBound++;
     candidates.push(candidate);
   }
-  const target = setting.windows.staticMiddleMm;
-  const miss = (c: CandidateResult): number =>
-    c.staticSagMm === null ? Number.MAX_VALUE : Math.abs(c.staticSagMm - target);
-  candidates.sort(
-    (a, b) =>
-      Number(b.feasible) - Number(a.feasible) ||
-      miss(a) - miss(b) ||
-      b.available - a.available ||
-      (a.sku < b.sku ? -1 : a.sku > b.sku ? 1 : 0),
-  );
-  const best = candidates.find((c) => c.feasible) ?? null;
-  const inStock = candidates.find((c) => c.feasible && c.inStock) ?? null;
+  sortCandidates(candidates, setting.windows.staticMiddleMm);
+  let best: CandidateResult | null = null;
+  let inStock: CandidateResult | null = null;
+  for (const c of candidates) {
+    if (!c.feasible) continue;
+    best ??= c;
+    if (c.inStock) {
+      inStock = c;
+      break;
+    }
+  }
   return { candidates, best, inStock, coilBound };
+}
+
+/**
+ * Feasible first, then static sag nearest its target, then the most available, then by SKU. An
+ * insertion sort with the comparison inline, since a family holds a few dozen springs and this
+ * runs for every sizing: cheaper than Array.prototype.sort calling back into a fresh closure.
+ */
+function sortCandidates(candidates: CandidateResult[], targetStaticMm: number): void {
+  for (let i = 1; i < candidates.length; i++) {
+    const item = candidates[i];
+    let j = i - 1;
+    while (j >= 0 && compareCandidates(candidates[j], item, targetStaticMm) > 0) {
+      candidates[j + 1] = candidates[j];
+      j--;
+    }
+    candidates[j + 1] = item;
+  }
+}
+
+function compareCandidates(a: CandidateResult, b: CandidateResult, targetStaticMm: number): number {
+  return (
+    Number(b.feasible) - Number(a.feasible) ||
+    missOf(a, targetStaticMm) - missOf(b, targetStaticMm) ||
+    b.available - a.available ||
+    (a.sku < b.sku ? -1 : a.sku > b.sku ? 1 : 0)
+  );
+}
+
+function missOf(c: CandidateResult, targetStaticMm: number): number {
+  return c.staticSagMm === null ? Number.MAX_VALUE : Math.abs(c.staticSagMm - targetStaticMm);
 }
 
 function assessCandidate(

@@ -4,29 +4,52 @@
  */
 
 import type { FrontRequest } from '../types/sizing';
-import { acceptFit, clampSag, type EndModel } from './end-model';
-import { springDeflection, springForce, springRateAt } from './spring-law';
+import { acceptFit, clampSag, type EndModel, type SingleRateFit } from './end-model';
+import { springDeflection, springForce, springRateAt, type SpringLaw } from './spring-law';
+
+// A class rather than an object of closures: a model is made for every sizing.
+class ForkModel implements EndModel {
+  readonly end = 'front';
+  readonly travelMm: number;
+  readonly springStrokeMm: number;
+  readonly springsPerEnd: number;
+  readonly regressive = false;
+  private readonly cos: number;
+
+  constructor(front: FrontRequest) {
+    this.travelMm = front.travelMm;
+    this.springStrokeMm = front.travelMm;
+    this.springsPerEnd = front.springCount;
+    this.cos = Math.cos((front.rakeDeg * Math.PI) / 180);
+  }
+
+  loadAtSag(spring: SpringLaw, preloadMm: number, sagMm: number): number {
+    return (this.springsPerEnd * springForce(spring, preloadMm + sagMm)) / this.cos;
+  }
+
+  sagAtLoad(spring: SpringLaw, preloadMm: number, loadN: number): number | null {
+    return clampSag(springDeflection(spring, (loadN * this.cos) / this.springsPerEnd) - preloadMm, this.travelMm);
+  }
+
+  preloadForSag(spring: SpringLaw, loadN: number, sagMm: number): number | null {
+    return springDeflection(spring, (loadN * this.cos) / this.springsPerEnd) - sagMm;
+  }
+
+  springDeflectionAt(preloadMm: number, sagMm: number): number {
+    return preloadMm + sagMm;
+  }
+
+  wheelRateAt(spring: SpringLaw, preloadMm: number, sagMm: number): number {
+    return (this.springsPerEnd * springRateAt(spring, preloadMm + sagMm)) / (this.cos * this.cos);
+  }
+
+  fitSingleRate(sagA: number, loadA: number, sagB: number, loadB: number): SingleRateFit | null {
+    const { cos, springsPerEnd: n } = this;
+    const rate = ((loadB - loadA) * cos) / (n * (sagB - sagA));
+    return acceptFit(rate, (loadA * cos) / (n * rate) - sagA);
+  }
+}
 
 export function makeForkModel(front: FrontRequest): EndModel {
-  const n = front.springCount;
-  const cos = Math.cos((front.rakeDeg * Math.PI) / 180);
-  const travelMm = front.travelMm;
-  return {
-    end: 'front',
-    travelMm,
-    springStrokeMm: travelMm,
-    springsPerEnd: n,
-    regressive: false,
-    loadAtSag: (spring, preloadMm, sagMm) => (n * springForce(spring, preloadMm + sagMm)) / cos,
-    sagAtLoad: (spring, preloadMm, loadN) =>
-      clampSag(springDeflection(spring, (loadN * cos) / n) - preloadMm, travelMm),
-    preloadForSag: (spring, loadN, sagMm) => springDeflection(spring, (loadN * cos) / n) - sagMm,
-    springDeflectionAt: (preloadMm, sagMm) => preloadMm + sagMm,
-    wheelRateAt: (spring, preloadMm, sagMm) =>
-      (n * springRateAt(spring, preloadMm + sagMm)) / (cos * cos),
-    fitSingleRate(sagA, loadA, sagB, loadB) {
-      const rate = ((loadB - loadA) * cos) / (n * (sagB - sagA));
-      return acceptFit(rate, (loadA * cos) / (n * rate) - sagA);
-    },
-  };
+  return new ForkModel(front);
 }

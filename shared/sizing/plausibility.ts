@@ -10,16 +10,18 @@ export function checkIntakePlausibility(
 ): SizingWarning[] {
   const bounds = thresholds.plausible;
   const warnings: SizingWarning[] = [];
-  const check = (what: string, value: number, unit: string, window: Window): void => {
-    if (value < window[0] || value > window[1]) warnings.push(warnImplausible(what, value, unit, window));
-  };
-  check('A bike wet mass', bike.massKg, ' kg', bounds.bikeKg);
-  check('A front weight share', bike.frontShare, '', bounds.frontShare);
-  check('An unsprung front mass', bike.unsprungFrontKg, ' kg', bounds.unsprungKg);
-  check('An unsprung rear mass', bike.unsprungRearKg, ' kg', bounds.unsprungKg);
-  check('A rider body mass', rider.bodyKg, ' kg', bounds.riderBodyKg);
-  check('A gear mass', rider.gearKg, ' kg', bounds.gearKg);
-  check('A luggage or passenger mass', rider.luggageKg, ' kg', bounds.luggageKg);
-  check("A rider's rear share", rider.rearShare, '', bounds.riderRearShare);
+  checkWithin(warnings, 'A bike wet mass', bike.massKg, ' kg', bounds.bikeKg);
+  checkWithin(warnings, 'A front weight share', bike.frontShare, '', bounds.frontShare);
+  checkWithin(warnings, 'An unsprung front mass', bike.unsprungFrontKg, ' kg', bounds.unsprungKg);
+  checkWithin(warnings, 'An unsprung rear mass', bike.unsprungRearKg, ' kg', bounds.unsprungKg);
+  checkWithin(warnings, 'A rider body mass', rider.bodyKg, ' kg', bounds.riderBodyKg);
+  checkWithin(warnings, 'A gear mass', rider.gearKg, ' kg', bounds.gearKg);
+  checkWithin(warnings, 'A luggage or passenger mass', rider.luggageKg, ' kg', bounds.luggageKg);
+  checkWithin(warnings, "A rider's rear share", rider.rearShare, '', bounds.riderRearShare);
   return warnings;
+}
+
+// Module-level rather than a closure in the check: this runs for every sizing.
+function checkWithin(warnings: SizingWarning[], what: string, value: number, unit: string, window: Window): void {
+  if (value < window[0] || value > window[1]) warnings.push(warnImplausible(what, value, unit, window));
 }

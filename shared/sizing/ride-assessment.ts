@@ -42,7 +42,6 @@ export function assessRide(
   const scale = newRate === null ? null : computeDampingRatioScale(oldRate, newRate);
   const oldWn = currentHz === null ? null : 2 * Math.PI * currentHz;
   const newWn = recommendedHz === null || scale === null ? null : 2 * Math.PI * recommendedHz;
-  const spans = [oldWn, newWn].filter((w): w is number => w !== null);
   return {
     rideFrequencyHz: { current: currentHz, recommended: recommendedHz, note: RIDE_FREQUENCY_NOTE },
     dampingRatioScale: scale,
@@ -51,8 +50,14 @@ export function assessRide(
       assumedDampingRatio: dampingRatio,
       old: oldWn === null ? null : describePreviewCurve(oldWn, dampingRatio),
       new: newWn === null || scale === null ? null : describePreviewCurve(newWn, dampingRatio * scale),
-      durationS: spans.length > 0 ? choosePreviewDuration(...spans) : null,
+      durationS: previewDuration(oldWn, newWn),
       note: PREVIEW_NOTE,
     },
   };
+}
+
+/** The chart span for whichever curves there are; none without either. */
+function previewDuration(oldWn: number | null, newWn: number | null): number | null {
+  if (oldWn === null) return newWn === null ? null : choosePreviewDuration(newWn);
+  return newWn === null ? choosePreviewDuration(oldWn) : choosePreviewDuration(oldWn, newWn);
 }

@@ -5,7 +5,7 @@
  */
 
 import type { RearRequest } from '../types/sizing';
-import { acceptFit, clampSag, type EndModel } from './end-model';
+import { acceptFit, clampSag, type EndModel, type SingleRateFit } from './end-model';
 import {
   buildLinkageCurve,
   curvatureAt,
@@ -18,30 +18,51 @@ import { SAME_LENGTH_MM } from './readings';
 import { springDeflection, springForce, springRateAt, type SpringLaw } from './spring-law';
 
 export function makeShockModel(rear: RearRequest): EndModel {
-  return rear.linkage && rear.linkage.length >= 2 ? makeLinkageModel(rear) : makeConstantRatioModel(rear);
+  return rear.linkage && rear.linkage.length >= 2 ? makeLinkageModel(rear) : new ConstantRatioModel(rear);
 }
 
-function makeConstantRatioModel(rear: RearRequest): EndModel {
-  const lr = rear.wheelTravelMm / rear.shockStrokeMm;
-  const gas = rear.gasForceN ?? 0;
-  const travelMm = rear.wheelTravelMm;
-  return {
-    end: 'rear',
-    travelMm,
-    springStrokeMm: rear.shockStrokeMm,
-    springsPerEnd: 1,
-    regressive: false,
-    loadAtSag: (spring, preloadMm, sagMm) => (springForce(spring, preloadMm + sagMm / lr) + gas) / lr,
-    sagAtLoad: (spring, preloadMm, loadN) =>
-      clampSag(lr * (springDeflection(spring, loadN * lr - gas) - preloadMm), travelMm),
-    preloadForSag: (spring, loadN, sagMm) => springDeflection(spring, loadN * lr - gas) - sagMm / lr,
-    springDeflectionAt: (preloadMm, sagMm) => preloadMm + sagMm / lr,
-    wheelRateAt: (spring, preloadMm, sagMm) => springRateAt(spring, preloadMm + sagMm / lr) / (lr * lr),
-    fitSingleRate(sagA, loadA, sagB, loadB) {
-      const rate = ((loadB - loadA) * lr * lr) / (sagB - sagA);
-      return acceptFit(rate, (loadA * lr - gas) / rate - sagA / lr);
-    },
-  };
+// A class rather than an object of closures: a model is made for every sizing.
+class ConstantRatioModel implements EndModel {
+  readonly end = 'rear';
+  readonly travelMm: number;
+  readonly springStrokeMm: number;
+  readonly springsPerEnd = 1;
+  readonly regressive = false;
+  private readonly lr: number;
+  private readonly gas: number;
+
+  constructor(rear: RearRequest) {
+    this.lr = rear.wheelTravelMm / rear.shockStrokeMm;
+    this.gas = rear.gasForceN ?? 0;
+    this.travelMm = rear.wheelTravelMm;
+    this.springStrokeMm = rear.shockStrokeMm;
+  }
+
+  loadAtSag(spring: SpringLaw, preloadMm: number, sagMm: number): number {
+    return (springForce(spring, preloadMm + sagMm / this.lr) + this.gas) / this.lr;
+  }
+
+  sagAtLoad(spring: SpringLaw, preloadMm: number, loadN: number): number | null {
+    return clampSag(this.lr * (springDeflection(spring, loadN * this.lr - this.gas) - preloadMm), this.travelMm);
+  }
+
+  preloadForSag(spring: SpringLaw, loadN: number, sagMm: number): number | null {
+    return springDeflection(spring, loadN * this.lr - this.gas) - sagMm / this.lr;
+  }
+
+  springDeflectionAt(preloadMm: number, sagMm: number): number {
+    return preloadMm + sagMm / this.lr;
+  }
+
+  wheelRateAt(spring: SpringLaw, preloadMm: number, sagMm: number): number {
+    return springRateAt(spring, preloadMm + sagMm / this.lr) / (this.lr * this.lr);
+  }
+
+  fitSingleRate(sagA: number, loadA: number, sagB: number, loadB: number): SingleRateFit | null {
+    const { lr, gas } = this;
+    const rate = ((loadB - loadA) * lr * lr) / (sagB - sagA);
+    return acceptFit(rate, (loadA * lr - gas) / rate - sagA / lr);
+  }
 }
 
 function makeLinkageModel(rear: RearRequest): EndModel {

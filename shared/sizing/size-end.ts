@@ -11,6 +11,7 @@ import type {
   FrontRequest,
   LoadsN,
   PreloadAdvice,
+  RangeMm,
   RearRequest,
   SizingContext,
   SizingWarning,
@@ -101,16 +102,11 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
   const implied = measured ? computeImpliedRate(model, measured, intakeLoads) : null;
   const impliedRateNmm = implied ? implied.rateNmm : null;
   if (impliedRateNmm !== null && isRateMismatch(impliedRateNmm, installedRateNmm, thresholds.impliedRateMismatchPct)) {
-    const frictionSuspect = warnings.some((w) => w.code === 'friction-band-large');
+    const frictionSuspect = hasWarning(warnings, 'friction-band-large');
     warnings.push(warnImpliedRate(end, impliedRateNmm, installedRateNmm, frictionSuspect));
   }
 
-  const idealRateFor = (l: LoadsN): number | null => {
-    if (!usable) return null;
-    const fit = model.fitSingleRate(windows.staticMiddleMm, l.staticN, windows.riderMiddleMm, l.staticN + l.riderN);
-    return fit ? fit.rateNmm : null;
-  };
-  const idealRateNmm = idealRateFor(loads);
+  const idealRateNmm = usable ? computeIdealRate(model, windows, loads) : null;
 
   const preloadRangeMm = computePreloadRange(request.adjuster, currentPreloadMm, thresholds.minCaptivePreloadMm);
   let verdict: Verdict | null = null;
@@ -188,7 +184,7 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     fromWeights: {
       staticSagMm: predictedStatic,
       riderSagMm: predictedRider,
-      idealRateNmm: calibrated ? idealRateFor(intakeLoads) : idealRateNmm,
+      idealRateNmm: calibrated && usable ? computeIdealRate(model, windows, intakeLoads) : idealRateNmm,
     },
     verdict,
     verdictText: describeVerdict(
@@ -204,6 +200,17 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     ...ride,
     warnings,
   };
+}
+
+/** The single-rate spring that puts both sags in the middles of their windows under these loads. */
+function computeIdealRate(model: EndModel, windows: SagWindows, loads: LoadsN): number | null {
+  const fit = model.fitSingleRate(windows.staticMiddleMm, loads.staticN, windows.riderMiddleMm, loads.staticN + loads.riderN);
+  return fit ? fit.rateNmm : null;
+}
+
+function hasWarning(warnings: readonly SizingWarning[], code: SizingWarning['code']): boolean {
+  for (const w of warnings) if (w.code === code) return true;
+  return false;
 }
 
 function noteModelLimits(
@@ -264,17 +271,20 @@ function describeTarget(
   aimRiderSagMm: number,
   context: SizingContext,
 ): TargetUsed {
-  const pct = (r: { min: number; max: number }) => ({ min: toPercent(r.min, travelMm), max: toPercent(r.max, travelMm) });
   return {
     discipline: context.profile.discipline,
     label: context.profile.label,
     source: windows.source,
     riderSagMm: windows.riderSagMm,
     staticSagMm: windows.staticSagMm,
-    riderSagPct: pct(windows.riderSagMm),
-    staticSagPct: pct(windows.staticSagMm),
+    riderSagPct: rangeToPercent(windows.riderSagMm, travelMm),
+    staticSagPct: rangeToPercent(windows.staticSagMm, travelMm),
     riderMiddleMm: windows.riderMiddleMm,
     staticMiddleMm: windows.staticMiddleMm,
     aimRiderSagMm,
   };
+}
+
+function rangeToPercent(range: RangeMm, travelMm: number): RangeMm {
+  return { min: toPercent(range.min, travelMm), max: toPercent(range.max, travelMm) };
 }

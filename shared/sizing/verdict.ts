@@ -39,37 +39,15 @@ export function aimPreload(
   rangeMm: RangeMm,
 ): PreloadAim {
   const totalN = loads.staticN + loads.riderN;
-  const riderSagAt = (preloadMm: number) => model.sagAtLoad(spring, preloadMm, totalN);
-  const staticSagAt = (preloadMm: number) => model.sagAtLoad(spring, preloadMm, loads.staticN);
   const rider = findPreloadBand(model, spring, totalN, windows.riderSagMm);
   const stat = findPreloadBand(model, spring, loads.staticN, windows.staticSagMm);
   const middle = findHoldingPreload(model, spring, totalN, windows.riderMiddleMm);
-  const aim = (
-    verdict: Verdict,
-    preloadMm: number,
-    unreachable: PreloadAim['unreachable'] = null,
-    limitedByAdjuster = false,
-  ): PreloadAim => {
-    const finite = Number.isFinite(preloadMm);
-    return {
-      verdict,
-      aimRiderSagMm: (finite ? riderSagAt(preloadMm) : null) ?? windows.riderMiddleMm,
-      neededPreloadMm: finite ? preloadMm : null,
-      middlePreloadMm: Number.isFinite(middle) ? middle : null,
-      limitedByAdjuster,
-      unreachable,
-    };
-  };
-  // No preload serves: aim at the middle, as a spring of the right rate would be set.
-  const misfit = (verdict: 'too-soft' | 'too-stiff', unreachable: PreloadAim['unreachable']): PreloadAim => ({
-    ...aim(verdict, middle, unreachable),
-    aimRiderSagMm: windows.riderMiddleMm,
-  });
-  const missesRider = (preloadMm: number) => !isInsideWindow(riderSagAt(preloadMm), windows.riderSagMm);
-  const middleUnreachable = Number.isFinite(middle) && missesRider(middle) ? 'rider' : null;
+  const aim: Aiming = { model, spring, totalN, windows, middle };
+  const middleUnreachable =
+    Number.isFinite(middle) && !isInsideWindow(model.sagAtLoad(spring, middle, totalN), windows.riderSagMm) ? 'rider' : null;
 
-  if (rider.max < stat.min) return misfit('too-stiff', middleUnreachable);
-  if (rider.min > stat.max) return misfit('too-soft', middleUnreachable);
+  if (rider.max < stat.min) return aimMisfit(aim, 'too-stiff', middleUnreachable);
+  if (rider.min > stat.max) return aimMisfit(aim, 'too-soft', middleUnreachable);
   const both = { min: Math.max(rider.min, stat.min), max: Math.min(rider.max, stat.max) };
   const reachable = { min: Math.max(both.min, rangeMm.min), max: Math.min(both.max, rangeMm.max) };
   const inRange = reachable.min <= reachable.max;
@@ -77,16 +55,51 @@ export function aimPreload(
 
   // Bands that overlap yet hold no sag in its window: the sag jumps past it. A rider sag deeper
   // than its window, or a static sag shallower, leaves too much between the two (too soft, 5c).
-  const riderSag = riderSagAt(preloadMm);
+  const riderSag = model.sagAtLoad(spring, preloadMm, totalN);
   if (!isInsideWindow(riderSag, windows.riderSagMm)) {
-    return misfit(riderSag === null || riderSag > windows.riderSagMm.max ? 'too-soft' : 'too-stiff', 'rider');
+    return aimMisfit(aim, riderSag === null || riderSag > windows.riderSagMm.max ? 'too-soft' : 'too-stiff', 'rider');
   }
-  const staticSag = staticSagAt(preloadMm);
+  const staticSag = model.sagAtLoad(spring, preloadMm, loads.staticN);
   if (!isInsideWindow(staticSag, windows.staticSagMm)) {
-    return misfit(staticSag === null || staticSag > windows.staticSagMm.max ? 'too-stiff' : 'too-soft', 'static');
+    return aimMisfit(aim, staticSag === null || staticSag > windows.staticSagMm.max ? 'too-stiff' : 'too-soft', 'static');
   }
-  if (!inRange) return aim('preload-out-of-range', preloadMm);
-  return aim('keep', preloadMm, null, preloadMm !== clamp(middle, both));
+  if (!inRange) return aimAt(aim, 'preload-out-of-range', preloadMm, null, false);
+  return aimAt(aim, 'keep', preloadMm, null, preloadMm !== clamp(middle, both));
+}
+
+/** What every outcome of one aim is worked out from; module-level helpers rather than closures, as this runs for every end. */
+interface Aiming {
+  model: EndModel;
+  spring: SpringLaw;
+  totalN: number;
+  windows: SagWindows;
+  /** Preload that puts rider sag in the middle of its window. */
+  middle: number;
+}
+
+function aimAt(
+  aim: Aiming,
+  verdict: Verdict,
+  preloadMm: number,
+  unreachable: PreloadAim['unreachable'],
+  limitedByAdjuster: boolean,
+): PreloadAim {
+  const finite = Number.isFinite(preloadMm);
+  return {
+    verdict,
+    aimRiderSagMm: (finite ? aim.model.sagAtLoad(aim.spring, preloadMm, aim.totalN) : null) ?? aim.windows.riderMiddleMm,
+    neededPreloadMm: finite ? preloadMm : null,
+    middlePreloadMm: Number.isFinite(aim.middle) ? aim.middle : null,
+    limitedByAdjuster,
+    unreachable,
+  };
+}
+
+/** No preload serves: aim at the middle, as a spring of the right rate would be set. */
+function aimMisfit(aim: Aiming, verdict: 'too-soft' | 'too-stiff', unreachable: PreloadAim['unreachable']): PreloadAim {
+  const outcome = aimAt(aim, verdict, aim.middle, unreachable, false);
+  outcome.aimRiderSagMm = aim.windows.riderMiddleMm;
+  return outcome;
 }
 
 /** Preloads that keep the sag under this load inside the window: from its deep edge to its shallow one. */

@@ -84,6 +84,14 @@ const SORT_EXPRESSIONS = {
   available: '(s.onHand - s.reserved)',
 } as const;
 
+/** The trigram index finds substrings of three characters or more; a shorter search reads every row. */
+const TRIGRAM = 3;
+
+/** An FTS5 query for the text as one phrase in these columns: with trigrams, the rows that contain it, ignoring case. */
+function trigramMatch(columns: string[], text: string): string {
+  return `{${columns.join(' ')}} : "${text.replace(/"/g, '""')}"`;
+}
+
 function likePattern(text: string): string {
   return `%${text.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
@@ -115,10 +123,12 @@ export class CatalogueService {
     if (query.belowReorder) q.andWhere('s.onHand - s.reserved < s.reorderPoint');
     if (query.q) {
       // Riders and the desk do not see supplier codes, so they cannot find springs by them either.
-      const supplierCode = detail ? ` OR lower(s.supplierCode) LIKE :pattern ESCAPE '\\'` : '';
-      q.andWhere(`(lower(s.sku) LIKE :pattern ESCAPE '\\' OR lower(s.family) LIKE :pattern ESCAPE '\\'${supplierCode})`, {
-        pattern: likePattern(query.q),
-      });
+      const searched = detail ? ['sku', 'family', 'supplierCode'] : ['sku', 'family'];
+      if ([...query.q].length >= TRIGRAM) {
+        q.andWhere(`s.id IN (SELECT rowid FROM spring_rate_search WHERE spring_rate_search MATCH :match)`, { match: trigramMatch(searched, query.q) });
+      } else {
+        q.andWhere(`(${searched.map((c) => `lower(s.${c}) LIKE :pattern ESCAPE '\\'`).join(' OR ')})`, { pattern: likePattern(query.q) });
+      }
     }
     const order = query.order === 'desc' ? 'DESC' : 'ASC';
     q.orderBy(SORT_EXPRESSIONS[query.sort], order);

@@ -1,0 +1,70 @@
+/**
+ * The real server (`server/index.ts`) as a child process over a data folder the benchmark has
+ * filled, on a free loopback port, so its memory is its own and can be read from /proc: VmHWM is
+ * the peak resident set since the process started (proc(5)).
+ */
+import { ChildProcess, spawn } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import { DEMO_PASSWORD } from '../../server/seed/demo-accounts';
+
+export interface ServerProcess {
+  url: string;
+  /** Peak and current resident memory of the server process, in bytes. */
+  memory: () => { peakBytes: number; residentBytes: number };
+  stop: () => Promise<void>;
+}
+
+const root = path.resolve(__dirname, '../..');
+
+function readStatusKb(pid: number, field: 'VmHWM' | 'VmRSS'): number {
+  const match = new RegExp(`^${field}:\\s+(\\d+) kB`, 'm').exec(fs.readFileSync(`/proc/${pid}/status`, 'utf8'));
+  if (!match) throw new Error(`/proc/${pid}/status has no ${field}`);
+  return Number(match[1]);
+}
+
+export function startServerProcess(dataDir: string): Promise<ServerProcess> {
+  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    cwd: root,
+    env: { ...process.env, NODE_ENV: 'test', PORT: '0', DATA_DIR: dataDir, SAGWRIGHT_DEMO: '1' },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  child.stderr?.on('data', (chunk) => (output += chunk));
+  const stop = () =>
+    new Promise<void>((resolve) => {
+      if (child.exitCode !== null || child.signalCode !== null) return resolve();
+      child.once('exit', () => resolve());
+      child.kill('SIGTERM');
+    });
+  const pid = child.pid;
+  if (pid === undefined) throw new Error('the server process did not start');
+  const memory = () => ({ peakBytes: readStatusKb(pid, 'VmHWM') * 1024, residentBytes: readStatusKb(pid, 'VmRSS') * 1024 });
+  return new Promise((resolve, reject) => {
+    child.stdout?.on('data', (chunk: Buffer) => {
+      output += chunk;
+      const match = /running at http:\/\/localhost:(\d+)/.exec(output);
+      if (match) resolve({ url: `http://127.0.0.1:${match[1]}`, memory, stop });
+    });
+    child.once('exit', (code) => reject(new Error(`the server exited with ${code}:\n${output}`)));
+  });
+}
+
+/** An access token for a demo account. */
+export async function signIn(url: string, email: string): Promise<string> {
+  const response = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+  });
+  if (response.status !== 200) throw new Error(`sign-in answered ${response.status}: ${await response.text()}`);
+  return ((await response.json()) as { token: string }).token;
+}
+
+/** A GET that must answer 200; the body is read in full, as a client would. */
+export async function getOk(url: string, token?: string): Promise<unknown> {
+  const response = await fetch(url, { headers: token ? { authorization: `Bearer ${token}` } : {} });
+  const body = await response.text();
+  if (response.status !== 200) throw new Error(`GET ${url} answered ${response.status}: ${body.slice(0, 500)}`);
+  return JSON.parse(body);
+}

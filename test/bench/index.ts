@@ -6,12 +6,14 @@
 import { benchApi } from './api.bench';
 import { benchEngine } from './engine.bench';
 import { BenchRow, printTable } from './measure';
+import { benchWeb } from './web.bench';
 
 type Bench = () => BenchRow[] | Promise<BenchRow[]>;
 
 const benches: Bench[] = [
   benchEngine,
   benchApi,
+  benchWeb,
 ];
 
 async function runBenches(): Promise<void> {

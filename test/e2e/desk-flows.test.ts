@@ -18,6 +18,7 @@
 import { Browser, Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
+import { formatNumber } from '../../shared/sizing/format';
 import type { QuoteView, SpringOption } from '../../shared/types/quote';
 import { signInThroughForm, waitForPath } from './auth-helpers';
 import { launchBrowser, openPage, screenshot, type ViewportName } from './browser';
@@ -174,8 +175,15 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   await wide.page.waitForURL((url) => url.pathname.startsWith('/desk/quotes/'));
   await wide.page.getByRole('heading', { name: /^Quote Q-/, level: 1 }).waitFor();
   const firstId = Number(new URL(wide.page.url()).pathname.split('/').at(-1));
+  // The fork spring the result recommends, from the shelf.
+  const { record } = await call<{ record: { result: { front: { recommendation: { inStock: { sku: string; rateNmm: number } } } } } }>(
+    'GET',
+    `/sizing-records/${records[0].id}`,
+    deskToken,
+  );
+  const forkSpring = record.result.front.recommendation.inStock;
   const before = await visible(wide.page, 'total-total').innerText();
-  await wide.page.locator('[role="button"][aria-label^="Add KF"]:not([aria-disabled="true"])').first().click();
+  await wide.page.getByRole('button', { name: `Add ${forkSpring.sku}` }).click();
   await wide.page.waitForFunction((previous) => document.querySelector('[data-testid="total-total"]')?.textContent !== previous, before);
   const firstKnown = await quoteLinks();
   await wide.page.getByRole('button', { name: 'Send to the customer' }).click();
@@ -239,6 +247,7 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   await riderPage.page.goto(`${server.url}/rider/bikes/${bikeId}/log`);
   await riderPage.page.getByRole('heading', { name: 'Setup log', level: 1 }).waitFor();
   await riderPage.page.getByText(`Spring swap, quote ${fitted.quote.number} v2`).waitFor();
+  await riderPage.page.getByText(new RegExp(`^Front spring .* → ${formatNumber(forkSpring.rateNmm, 1)} N/mm$`)).waitFor();
   await screenshot(riderPage.page, 'desk-rider-setup-log-phone');
   expect(customer.errors).toEqual([]);
   expect(riderPage.errors).toEqual([]);

@@ -3,6 +3,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import querystring from 'node:querystring';
 import cookieParser from 'cookie-parser';
 import cors from 'cors';
 import express, { Express } from 'express';
@@ -15,6 +16,23 @@ import { PAYMENT_WEBHOOK_PATH } from './routes/payments.router';
 import { mountRoutes } from './routes/route-table';
 
 export const JSON_BODY_LIMIT = '100kb';
+
+/**
+ * Keys no field is named. Yup looks each key of a body up in its table of fields, finds these on
+ * Object.prototype and throws a TypeError (a 500); they are dropped as any unknown key would be.
+ */
+const PROTOTYPE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
+
+function dropPrototypeKeys(key: string, value: unknown): unknown {
+  return PROTOTYPE_KEYS.has(key) ? undefined : value;
+}
+
+/** Express's "simple" query parser (node:querystring), less the prototype keys. */
+function parseQuery(text: string): querystring.ParsedUrlQuery {
+  const query = querystring.parse(text);
+  for (const key of PROTOTYPE_KEYS) delete query[key];
+  return query;
+}
 
 function securityHeaders() {
   return helmet({
@@ -43,13 +61,14 @@ export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  app.set('query parser', parseQuery);
   app.use(securityHeaders());
 
   const api = express.Router();
   api.use(cors({ origin: ctx.config.corsOrigins, credentials: true }));
   // The payment webhook's signature covers the raw bytes: parsed before (and so skipped by) the JSON parser.
   api.use(PAYMENT_WEBHOOK_PATH, express.raw({ type: '*/*', limit: JSON_BODY_LIMIT }));
-  api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(express.json({ limit: JSON_BODY_LIMIT, reviver: dropPrototypeKeys }));
   api.use(cookieParser());
   api.use(mountRoutes(apiRoutes(ctx), authGuards(ctx)));
   api.use(apiNotFound);

@@ -7,7 +7,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 const root = path.resolve(__dirname, '../..');
-const sources = ['app', 'src', 'shared', 'fonts', 'app.json', 'babel.config.js', 'package-lock.json', 'tsconfig.json'];
+const sources = ['app', 'src', 'shared', 'fonts', 'app.json', 'babel.config.js', 'metro.config.js', 'package-lock.json', 'tsconfig.json'];
 const stamp = path.join(root, 'dist', 'index.html');
 
 function newestChange(entry: string): number {

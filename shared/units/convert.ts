@@ -1,12 +1,58 @@
 /**
  * Unit conversions at the edges (the engine works in mm, kg, N, N/mm). Each factor is asked of
- * mathjs once and cached, so converting a form full of numbers stays cheap. Only the unit
- * factories are pulled in, to keep the web bundle small.
+ * mathjs once and cached, so converting a form full of numbers stays cheap.
+ *
+ * The instance is assembled from factories to keep the web bundle small: mathjs's Unit class and
+ * the two functions used here, over the number-only arithmetic of `mathjs/number`. The full
+ * arithmetic the Unit class would otherwise pull in also handles matrices, which brings mathjs's
+ * matrix types along (about 10 KB gzipped) for values that are only ever plain numbers here.
  */
 
-import { create, createUnitDependencies, unitDependencies } from 'mathjs';
+import { create, createBigNumberClass, createComplexClass, createCreateUnit, createFractionClass, createUnitClass, createUnitFunction } from 'mathjs';
+import {
+  createAbs,
+  createAddScalar,
+  createCeil,
+  createDivideScalar,
+  createEqual,
+  createEqualScalar,
+  createFix,
+  createFloor,
+  createFormat,
+  createIsNumeric,
+  createMultiplyScalar,
+  createNumber,
+  createPow,
+  createRound,
+  createSubtractScalar,
+  createTyped,
+} from 'mathjs/number';
 
-const math = create({ unitDependencies, createUnitDependencies });
+const math = create({
+  createUnitClass,
+  createUnitFunction,
+  createCreateUnit,
+  // The Unit class names these types among its dependencies, so they must exist.
+  createBigNumberClass,
+  createComplexClass,
+  createFractionClass,
+  createAbs,
+  createAddScalar,
+  createCeil,
+  createDivideScalar,
+  createEqual,
+  createEqualScalar,
+  createFix,
+  createFloor,
+  createFormat,
+  createIsNumeric,
+  createMultiplyScalar,
+  createNumber,
+  createPow,
+  createRound,
+  createSubtractScalar,
+  createTyped,
+});
 
 // mathjs has kgf and lbf but no slug; NIST SP 811 (2008) B.8 defines it as lbf*s^2/ft (1.459390 E+01 kg).
 math.createUnit('slug', '1 lbf s^2 / ft');

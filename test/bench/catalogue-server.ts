@@ -12,10 +12,22 @@ export interface ServerProcess {
   url: string;
   /** Peak and current resident memory of the server process, in bytes. */
   memory: () => { peakBytes: number; residentBytes: number };
+  /** CPU time the server process has used, user and system, in seconds: on a busy machine a steadier figure than the wall clock. */
+  cpuSeconds: () => number;
   stop: () => Promise<void>;
 }
 
 const root = path.resolve(__dirname, '../..');
+
+// Clock ticks per second for /proc/<pid>/stat: USER_HZ, 100 on Linux (proc(5), sysconf(_SC_CLK_TCK)).
+const USER_HZ = 100;
+
+function readCpuSeconds(pid: number): number {
+  const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
+  // Fields after the command name in brackets: utime and stime are the 14th and 15th of the line.
+  const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+  return (Number(fields[11]) + Number(fields[12])) / USER_HZ;
+}
 
 function readStatusKb(pid: number, field: 'VmHWM' | 'VmRSS'): number {
   const match = new RegExp(`^${field}:\\s+(\\d+) kB`, 'm').exec(fs.readFileSync(`/proc/${pid}/status`, 'utf8'));
@@ -44,7 +56,7 @@ export function startServerProcess(dataDir: string): Promise<ServerProcess> {
     child.stdout?.on('data', (chunk: Buffer) => {
       output += chunk;
       const match = /running at http:\/\/localhost:(\d+)/.exec(output);
-      if (match) resolve({ url: `http://127.0.0.1:${match[1]}`, memory, stop });
+      if (match) resolve({ url: `http://127.0.0.1:${match[1]}`, memory, cpuSeconds: () => readCpuSeconds(pid), stop });
     });
     child.once('exit', (code) => reject(new Error(`the server exited with ${code}:\n${output}`)));
   });

@@ -14,6 +14,7 @@ import body from '../server/fixtures/sizing-two-ends.json';
 import { generateSprings, insertSprings } from './catalogue-data';
 import { CANDIDATE_FIT, RATES_FOR_FIT_QUERY, SEARCH_SCENARIOS } from './catalogue-scenarios';
 import { getOk, signIn, startServerProcess } from './catalogue-server';
+import { benchImport } from './import.bench';
 import { BenchRow, percentile } from './measure';
 
 export const SCALE_SPRINGS = 100_000;
@@ -122,4 +123,9 @@ export async function benchCatalogue(): Promise<BenchRow[]> {
   } finally {
     fs.rmSync(dataDir, { recursive: true, force: true });
   }
+}
+
+/** The catalogue's searches at scale, then the CSV import at scale, one after the other. */
+export async function benchCatalogueAtScale(): Promise<BenchRow[]> {
+  return [...(await benchCatalogue()), ...(await benchImport())];
 }

@@ -4,6 +4,7 @@
  * next) and the rows of all of them print as one table at the end.
  */
 import { benchApi } from './api.bench';
+import { benchCatalogueAtScale } from './catalogue.bench';
 import { benchEngine } from './engine.bench';
 import { BenchRow, printTable } from './measure';
 import { benchWeb } from './web.bench';
@@ -13,6 +14,7 @@ type Bench = () => BenchRow[] | Promise<BenchRow[]>;
 const benches: Bench[] = [
   benchEngine,
   benchApi,
+  benchCatalogueAtScale,
   benchWeb,
 ];
 

@@ -160,7 +160,10 @@ function commonEndFields(endName: string, rateBounds: Bounds) {
     }),
     preloadMm: quantity(`${capitalise(endName)} preload`, [0, 100], ' mm', 'give how far the spring is compressed at full extension', {}),
     family: string()
-      .trim()
+      // Yup's trim() calls .trim() on whatever it is given, so a list or an object sent here threw
+      // past the field errors; only text is trimmed, and anything else is refused as not text.
+      .transform((value: unknown) => (typeof value === 'string' ? value.trim() : value))
+      .typeError("Spring family must be text: give the spring's size family so the catalogue can match it.")
       .required("Spring family is missing: give the spring's size family so the catalogue can match it.")
       .max(60, 'Spring family must be at most 60 characters.'),
     springType: springTypeSchema(endName),

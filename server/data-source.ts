@@ -9,6 +9,7 @@ import path from 'node:path';
 import sqlite3 from 'sqlite3';
 import { DataSource, DataSourceOptions, EntityManager } from 'typeorm';
 import { beginTransactionsImmediately } from './db/immediate-transactions';
+import { gateReads } from './db/read-gate';
 import { WriteQueue } from './db/write-queue';
 import { entities } from './entities';
 import { readConfig } from './env';
@@ -56,6 +57,7 @@ export class Database {
     await writer.runMigrations({ transaction: 'each' });
     const reader = new DataSource(dataSourceOptions(file, true));
     await reader.initialize();
+    gateReads(reader);
     return new Database(file, writer, reader);
   }
 

@@ -107,6 +107,18 @@ describe('body size, type and syntax', () => {
     await request(base).get('/api/health').expect(200);
   });
 
+  test('prototype keys, spelt out or as \\u escapes and at any depth, are dropped like any unknown key', async () => {
+    const escaped = '{"__proto\\u005f_":{"a":1},"constructor":{"name":"x"},"email":"nobody@example.test","password":"not the password"}';
+    const signIn = await request(base).post('/api/auth/sign-in').set('Content-Type', 'application/json').send(escaped);
+    expect([signIn.status, signIn.body.error?.code]).toEqual([401, expect.any(String)]);
+    const depth = 6_000;
+    const deep = `${'{"prototype":'.repeat(depth)}1${'}'.repeat(depth)}`;
+    const res = await request(base).post('/api/auth/sign-in').set('Content-Type', 'application/json').send(deep);
+    expect(res.status).toBe(400);
+    const wide = `{"email":"a@example.test","password":"long enough password","x":[${Array.from({ length: 5_000 }, () => '{"constructor":1}').join(',')}]}`;
+    expect((await request(base).post('/api/auth/sign-in').set('Content-Type', 'application/json').send(wide)).status).toBe(401);
+  });
+
   test('a wrongly typed body is named in a short message that does not echo it back', async () => {
     const wrong = await shop.asRider.post('/bikes', ['a'.repeat(5000)]).expect(400);
     expect(wrong.body.error.fields).toEqual({ '': expect.any(String) });

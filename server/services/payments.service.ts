@@ -191,12 +191,12 @@ async function recordDeposit(manager: EntityManager, gateway: PaymentGateway, in
   await manager.update(Quote, { id: quoteId }, { paidCents: quote.paidCents + intent.amount });
   quote.paidCents += intent.amount;
   if (quote.status === 'accepted') {
-    await moveQuote(manager, quote, 'deposit-paid', actor, at, 'paid', `Deposit ${intent.amount} cents, ${intent.id}`);
+    await moveQuote(manager, quote, 'deposit-paid', actor, at, 'paid', `Deposit of ${formatCents(intent.amount, quote.currency)} by card (payment ${intent.id})`);
     return { payment, kept: true };
   }
   const refund = await gateway.refundPayment(manager, quote, payment, intent.amount, at);
   const why = HOLDS_DEPOSIT.includes(quote.status) ? 'after the deposit was already paid' : `after the quote was ${quote.status}`;
-  await noteOnQuote(manager, quote, actor, at, `Deposit ${intent.amount} cents, ${intent.id}, arrived ${why}: refunded, ${refund.providerId}`);
+  await noteOnQuote(manager, quote, actor, at, `Deposit of ${formatCents(intent.amount, quote.currency)} by card (payment ${intent.id}) arrived ${why}: refunded to the card (refund ${refund.providerId})`);
   return { payment, kept: false };
 }
 

@@ -55,11 +55,15 @@ export interface QuoteListQuery {
 
 type LinePlan = Omit<QuoteLine, 'id' | 'quoteId'>;
 
-/** The record's recommended spring for an end: the one in stock, else the best. */
+/** The sizing's pick for an end, whatever its verdict: the best spring in stock, else the best to order. */
+function pickFor(record: SizingRecord, end: EndKind): CandidateResult | null {
+  const recommendation = record.result[end]?.recommendation;
+  return recommendation ? (recommendation.inStock ?? recommendation.best) : null;
+}
+
+/** The spring a swap should fit at an end: none where the sizing says to keep the installed one. */
 function recommendedFor(record: SizingRecord, end: EndKind): CandidateResult | null {
-  const result = record.result[end];
-  if (!result || result.verdict === 'keep') return null;
-  return result.recommendation.inStock ?? result.recommendation.best;
+  return record.result[end]?.verdict === 'keep' ? null : pickFor(record, end);
 }
 
 function candidateBySku(record: SizingRecord, end: EndKind, sku: string | null): CandidateResult | null {
@@ -344,7 +348,7 @@ export class QuotesService {
       const family = record.request[end]?.family;
       if (!family) continue;
       const springs = await read.find(SpringRate, { where: { kind: KIND_OF_END[end], family, active: true }, order: { rateNmm: 'ASC' } });
-      const pick = recommendedFor(record, end)?.sku;
+      const pick = pickFor(record, end)?.sku;
       options[end] = springs.map((s) => ({ springId: s.id, sku: s.sku, family: s.family, rateNmm: s.rateNmm, priceCents: s.priceCents, available: s.onHand - s.reserved, recommended: s.sku === pick }));
     }
     return options;
@@ -467,7 +471,7 @@ export class QuotesService {
         throw new ConflictError(`Quote ${quote.number} waits for its deposit: book the fitting once it is paid.`, 'deposit-due');
       }
       if (fittingAt.getTime() <= this.ctx.now().getTime()) throw new ValidationError({ fittingAt: 'The fitting must be in the future.' });
-      const note = `Fitting ${fittingAt.toISOString()}`;
+      const note = `Fitting booked for ${fittingAt.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
       await moveQuote(manager, quote, 'booked', actorOf(user), this.ctx.now(), 'booked', note);
       await manager.update(Quote, { id }, { fittingAt });
     });

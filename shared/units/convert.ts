@@ -28,34 +28,43 @@ import {
   createTyped,
 } from 'mathjs/number';
 
-const math = create({
-  createUnitClass,
-  createUnitFunction,
-  createCreateUnit,
-  // The Unit class names these types among its dependencies, so they must exist.
-  createBigNumberClass,
-  createComplexClass,
-  createFractionClass,
-  createAbs,
-  createAddScalar,
-  createCeil,
-  createDivideScalar,
-  createEqual,
-  createEqualScalar,
-  createFix,
-  createFloor,
-  createFormat,
-  createIsNumeric,
-  createMultiplyScalar,
-  createNumber,
-  createPow,
-  createRound,
-  createSubtractScalar,
-  createTyped,
-});
+/**
+ * Built on the first conversion rather than when the module loads: assembling the typed functions
+ * costs a noticeable slice of a slow phone's start-up, and screens that show only SI figures
+ * never convert at all.
+ */
+function buildUnitMath() {
+  const math = create({
+    createUnitClass,
+    createUnitFunction,
+    createCreateUnit,
+    // The Unit class names these types among its dependencies, so they must exist.
+    createBigNumberClass,
+    createComplexClass,
+    createFractionClass,
+    createAbs,
+    createAddScalar,
+    createCeil,
+    createDivideScalar,
+    createEqual,
+    createEqualScalar,
+    createFix,
+    createFloor,
+    createFormat,
+    createIsNumeric,
+    createMultiplyScalar,
+    createNumber,
+    createPow,
+    createRound,
+    createSubtractScalar,
+    createTyped,
+  });
+  // mathjs has kgf and lbf but no slug; NIST SP 811 (2008) B.8 defines it as lbf*s^2/ft (1.459390 E+01 kg).
+  math.createUnit('slug', '1 lbf s^2 / ft');
+  return math;
+}
 
-// mathjs has kgf and lbf but no slug; NIST SP 811 (2008) B.8 defines it as lbf*s^2/ft (1.459390 E+01 kg).
-math.createUnit('slug', '1 lbf s^2 / ft');
+let unitMath: ReturnType<typeof buildUnitMath> | undefined;
 
 export type LengthUnit = 'mm' | 'in';
 export type MassUnit = 'kg' | 'lb' | 'slug';
@@ -83,7 +92,8 @@ function factorBetween(from: DisplayUnit, to: DisplayUnit): number {
   const key = `${from}>${to}`;
   let factor = factors.get(key);
   if (factor === undefined) {
-    factor = math.unit(1, from).toNumber(to);
+    unitMath ??= buildUnitMath();
+    factor = unitMath.unit(1, from).toNumber(to);
     factors.set(key, factor);
   }
   return factor;

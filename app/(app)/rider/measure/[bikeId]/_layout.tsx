@@ -7,6 +7,9 @@ import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { useBike } from '@/hooks/use-bikes';
 import { useDraft, useStartDraft } from '@/hooks/use-draft';
+import { useTargetProfiles } from '@/hooks/use-target-profiles';
+import { useUnits } from '@/hooks/use-units';
+import { useWeighIn } from '@/hooks/use-weigh-in';
 
 /**
  * Holds the measuring flow's state for all its steps, so answers survive moving between them.
@@ -16,6 +19,10 @@ export default function MeasureLayout() {
   const bikeId = Number(useLocalSearchParams<{ bikeId: string }>().bikeId);
   const bike = useBike(bikeId);
   const draft = useDraft(bikeId);
+  // The first step needs these too: asked beside the bike and the draft, not after its screen loads.
+  useWeighIn();
+  useTargetProfiles();
+  useUnits();
   const startDraft = useStartDraft();
   const [startError, setStartError] = useState<Error | null>(null);
   const missing = draft.data && draft.data.draft === null;

@@ -86,6 +86,9 @@ export function WeighInForm({ weighIn, profiles, submitLabel, onSubmit }: WeighI
   return (
     <Formik<WeighInValues>
       initialValues={toValues(weighIn, units)}
+      // Checking the whole weigh-in on every keystroke kept a slow phone's typing waiting; a field
+      // is checked when it is left and on submit, and again as it is typed into while it shows an error.
+      validateOnChange={false}
       validate={(values) => {
         try {
           weighInSchema.validateSync(toWeighIn(values, units), { abortEarly: false });

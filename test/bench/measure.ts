@@ -26,6 +26,8 @@ export interface BenchRow {
   ratio: number;
   target: string;
   met: boolean;
+  /** Why the figure can fall short of its target, printed under the table when it does. */
+  shortfall?: string;
 }
 
 export function printTable(rows: BenchRow[]): void {
@@ -36,6 +38,10 @@ export function printTable(rows: BenchRow[]): void {
   console.log(line(header));
   console.log(widths.map((w) => '-'.repeat(w)).join('-|-'));
   cells.forEach((c) => console.log(line(c)));
+  const missed = rows.filter((r) => !r.met);
+  if (!missed.length) return;
+  console.log('\nWhere a target is not met:');
+  missed.forEach((r) => console.log(`- ${r.name}: ${r.shortfall ?? 'no explanation given; see DEVELOPERS.md, "Speed".'}`));
 }
 
 /** Formats a rate the way every row shows it: operations per second and the time per operation. */

@@ -68,7 +68,8 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       access: publicAccess,
       handler: async (req, res) => {
         const token: unknown = req.cookies?.[REFRESH_COOKIE];
-        const user = typeof token === 'string' ? await sessions.verify(token, 'refresh') : undefined;
+        const session = typeof token === 'string' ? await sessions.verify(token, 'refresh') : undefined;
+        const user = session && (await users.find(session.id));
         if (!user) {
           res.clearCookie(REFRESH_COOKIE, cookie);
           throw new UnauthorizedError('Your session has ended; sign in again.', 'session-expired');

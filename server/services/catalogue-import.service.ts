@@ -290,8 +290,10 @@ function sameValue(a: unknown, b: unknown): boolean {
   return a === b;
 }
 
+/** In place: adding a field to a spread copy takes V8's slow path, a few µs a row over 100,000 rows. */
 function toExisting(row: Record<string, unknown>): ExistingSpring {
-  return { ...(row as unknown as ExistingSpring), active: Boolean(row.active) };
+  row.active = Boolean(row.active);
+  return row as unknown as ExistingSpring;
 }
 
 async function loadExisting(query: (sql: string, parameters: unknown[]) => Promise<Record<string, unknown>[]>, skus: string[]): Promise<Map<string, ExistingSpring>> {
@@ -362,7 +364,7 @@ export function planImport(file: ParsedFile, existing: Map<string, ExistingSprin
     else if (sku) firstLineOf.set(sku, line);
 
     const before = sku ? existing.get(sku) : undefined;
-    const merged = mergeSpring(before ?? { ...NEW_SPRING_DEFAULTS, sku }, given);
+    const merged = mergeSpring(before ?? { sku, ...NEW_SPRING_DEFAULTS }, given);
     for (const field of REQUIRED) {
       if (merged[field] != null) continue;
       if (given.has(field)) fail(field, `${SPRING_FIELD_LABELS[field]} cannot be empty.`);

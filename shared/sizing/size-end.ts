@@ -197,7 +197,11 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     ),
     preload,
     recommendation: { inStock: ranked.inStock, best: ranked.best, candidates: ranked.candidates },
-    ...ride,
+    // Named one by one: V8 copies a spread in a large literal through a slow path (tens of µs).
+    rideFrequencyHz: ride.rideFrequencyHz,
+    dampingRatioScale: ride.dampingRatioScale,
+    reboundHint: ride.reboundHint,
+    preview: ride.preview,
     warnings,
   };
 }

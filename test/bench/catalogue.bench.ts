@@ -13,8 +13,9 @@ import { SizingDataCache } from '../../server/services/sizing-data.service';
 import body from '../server/fixtures/sizing-two-ends.json';
 import { generateSprings, insertSprings } from './catalogue-data';
 import { CANDIDATE_FIT, RATES_FOR_FIT_QUERY, SEARCH_SCENARIOS } from './catalogue-scenarios';
-import { getOk, signIn, startServerProcess } from './catalogue-server';
+import { signIn, startServerProcess } from './catalogue-server';
 import { benchImport } from './import.bench';
+import { loopbackClient } from './loopback-client';
 import { BenchRow, percentile } from './measure';
 
 export const SCALE_SPRINGS = 100_000;
@@ -36,31 +37,24 @@ async function p95Of(task: () => Promise<unknown>, samples = SAMPLES): Promise<n
 
 type Timings = Map<string, number>;
 
-async function postSizing(url: string, token: string): Promise<void> {
-  const response = await fetch(`${url}/api/sizing`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
-    body: JSON.stringify(body),
-  });
-  const text = await response.text();
-  if (response.status !== 200) throw new Error(`POST /api/sizing answered ${response.status}: ${text.slice(0, 500)}`);
-}
-
 /** Every HTTP scenario against the server over this data folder, with GET /api/health beside them. */
 async function timeOverHttp(dataDir: string): Promise<Timings> {
   const server = await startServerProcess(dataDir);
+  const client = loopbackClient();
   try {
     const counter = await signIn(server.url, 'counter@demo.test');
     const rider = await signIn(server.url, 'rider@demo.test');
+    const get = (path: string, token?: string) => () => client.ok('GET', `${server.url}${path}`, token);
     const timings: Timings = new Map();
-    timings.set('health', await p95Of(() => getOk(`${server.url}/api/health`)));
+    timings.set('health', await p95Of(get('/api/health')));
     for (const scenario of SEARCH_SCENARIOS) {
-      timings.set(scenario.name, await p95Of(() => getOk(`${server.url}/api/catalogue/springs?${scenario.query}`, counter)));
+      timings.set(scenario.name, await p95Of(get(`/api/catalogue/springs?${scenario.query}`, counter)));
     }
-    timings.set('rates-for-fit', await p95Of(() => getOk(`${server.url}/api/catalogue/rates-for-fit?${RATES_FOR_FIT_QUERY}`, counter)));
-    timings.set('sizing', await p95Of(() => postSizing(server.url, rider)));
+    timings.set('rates-for-fit', await p95Of(get(`/api/catalogue/rates-for-fit?${RATES_FOR_FIT_QUERY}`, counter)));
+    timings.set('sizing', await p95Of(() => client.ok('POST', `${server.url}/api/sizing`, rider, body)));
     return timings;
   } finally {
+    client.close();
     await server.stop();
   }
 }

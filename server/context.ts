@@ -16,7 +16,7 @@ export interface AppContext {
   now: () => Date;
   secrets: { jwt: string };
   mailer: Mailer;
-  /** Profiles, settings and candidate springs the sizing reads, cached until a write invalidates them. */
+  /** Profiles, settings and candidate springs the sizing reads, and catalogue search totals, cached until a write invalidates them. */
   sizingData: SizingDataCache;
   /** The card payment provider's SDK, pointed at the local stand-in outside production without keys. */
   payments: PaymentGateway;

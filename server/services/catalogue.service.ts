@@ -133,14 +133,16 @@ export class CatalogueService {
         q.andWhere(`(${searched.map((c) => `lower(s.${c}) LIKE :pattern ESCAPE '\\'`).join(' OR ')})`, { pattern: likePattern(query.q) });
       }
     }
+    const [filterSql, filterParameters] = q.getQueryAndParameters();
+    const counted = q.clone();
     const order = query.order === 'desc' ? 'DESC' : 'ASC';
     q.orderBy(SORT_EXPRESSIONS[query.sort], order);
     if (query.sort === 'family') q.addOrderBy('s.rateNmm', order);
     q.addOrderBy('s.sku', 'ASC').addOrderBy('s.id', 'ASC');
-    const [rows, total] = await q
-      .offset((query.page - 1) * query.pageSize)
-      .limit(query.pageSize)
-      .getManyAndCount();
+    const [rows, total] = await Promise.all([
+      q.offset((query.page - 1) * query.pageSize).limit(query.pageSize).getMany(),
+      this.ctx.sizingData.searchTotal(`${filterSql}\u0000${JSON.stringify(filterParameters)}`, () => counted.getCount()),
+    ]);
     return { springs: rows.map((row) => toSpringView(row, query.unit, role)), total, page: query.page, pageSize: query.pageSize, unit: query.unit };
   }
 

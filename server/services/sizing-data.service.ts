@@ -1,7 +1,8 @@
 /**
- * What every sizing reads (target profiles, engine settings, the candidate springs of a fit),
- * cached in memory. Whatever writes those tables calls `invalidate` inside its write, so the next
- * sizing sees the change at once.
+ * What every sizing reads (target profiles, engine settings, the candidate springs of a fit), and
+ * the totals of the counter's searches, which the same spring and stock writes change, cached in
+ * memory. Whatever writes those tables calls `invalidate` inside its write, so the next sizing or
+ * search sees the change at once.
  */
 import { buildWarningThresholds } from '../../shared/sizing';
 import type { CatalogueSpring, TargetProfile as Profile, WarningThresholds } from '../../shared/types/sizing';
@@ -57,10 +58,14 @@ function toCatalogueSpring(row: SpringRate): CatalogueSpring {
   };
 }
 
+/** Distinct searches whose totals are kept; past that, all are dropped and counted afresh. */
+const MAX_SEARCH_TOTALS = 1000;
+
 export class SizingDataCache {
   private profiles?: Promise<Map<string, Profile>>;
   private thresholds?: Promise<WarningThresholds>;
   private springs = new Map<string, Promise<CatalogueSpring[]>>();
+  private searchTotals = new Map<string, Promise<number>>();
 
   constructor(private readonly db: Database) {}
 
@@ -69,6 +74,7 @@ export class SizingDataCache {
     this.profiles = undefined;
     this.thresholds = undefined;
     this.springs.clear();
+    this.searchTotals.clear();
   }
 
   profileList(): Promise<Map<string, Profile>> {
@@ -104,6 +110,21 @@ export class SizingDataCache {
         .then((rows) => rows.map(toCatalogueSpring));
       this.springs.set(key, found);
       forgetOnFailure(found, () => this.springs.delete(key));
+    }
+    return found;
+  }
+
+  /**
+   * The number of springs one catalogue search finds, keyed by its SQL and parameters: counting an
+   * unfiltered page walks the whole index (about 10 ms at 100,000 springs), on every page turn.
+   */
+  searchTotal(key: string, count: () => Promise<number>): Promise<number> {
+    let found = this.searchTotals.get(key);
+    if (!found) {
+      if (this.searchTotals.size >= MAX_SEARCH_TOTALS) this.searchTotals.clear();
+      found = count();
+      this.searchTotals.set(key, found);
+      forgetOnFailure(found, () => this.searchTotals.delete(key));
     }
     return found;
   }

@@ -9,7 +9,7 @@ export type { SpringKind };
  * changes them, in the transaction that records the movement.
  */
 @Entity({ name: 'spring_rate' })
-@Index('idx_spring_rate_fit', ['kind', 'family', 'rateNmm'])
+@Index('idx_spring_rate_fit', ['kind', 'family', 'rateNmm', 'sku'])
 export class SpringRate {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id!: number;

@@ -14,6 +14,7 @@ import type { Role } from '../../../shared/types/roles';
 import { Database, DATABASE_FILE, dataSourceOptions } from '../../../server/data-source';
 import { migrations } from '../../../server/migrations';
 import { CatalogueSearchIndexes1764634400000 } from '../../../server/migrations/1764634400000-catalogue-search-indexes';
+import { SearchOrderIndexes1764634500000 } from '../../../server/migrations/1764634500000-search-order-indexes';
 import { CatalogueService } from '../../../server/services/catalogue.service';
 import { makeTestContext, tempDir, TestContext } from '../test-context';
 import { createSpring } from './helpers';
@@ -91,6 +92,19 @@ describe('query plans', () => {
     expect(await plan(`SELECT * FROM "spring_rate" "s" WHERE "s"."active" = 1 ORDER BY "s"."family", "s"."rateNmm" LIMIT 50`)).toMatch(/USING INDEX idx_spring_rate_family_rate/);
     expect(await plan(`SELECT COUNT(1) FROM "spring_rate" "s" WHERE "s"."active" = 1`)).toMatch(/COVERING INDEX/);
   });
+
+  test('a rate range, a fit by rate and the family order read their page in order, with no sort', async () => {
+    const ordered = [
+      [`"s"."kind" = 'shock' AND "s"."rateNmm" >= 80 AND "s"."rateNmm" <= 90 AND "s"."onHand" - "s"."reserved" > 0`, `"s"."rateNmm", "s"."sku", "s"."id"`, 'idx_spring_rate_kind_rate'],
+      [`"s"."kind" = 'fork' AND "s"."family" = 'F43x290'`, `"s"."rateNmm", "s"."sku", "s"."id"`, 'idx_spring_rate_fit'],
+      ['1 = 1', `"s"."family", "s"."rateNmm", "s"."sku", "s"."id"`, 'idx_spring_rate_family_rate'],
+    ];
+    for (const [where, order, index] of ordered) {
+      const shown = await plan(`SELECT * FROM "spring_rate" "s" WHERE "s"."active" = 1 AND ${where} ORDER BY ${order} LIMIT 50 OFFSET 100`);
+      expect(shown).toContain(index);
+      expect(shown).not.toMatch(/TEMP B-TREE/);
+    }
+  });
 });
 
 describe('the migration', () => {
@@ -116,12 +130,37 @@ describe('the migration', () => {
     expect(found).toHaveLength(1);
     await db.close();
 
-    const source = await openUpTo(dir, mine + 1);
-    await source.undoLastMigration({ transaction: 'each' });
+    // Database.open ran every migration: undo those after this one, then this one.
+    const source = await openUpTo(dir, migrations.length);
+    for (let undone = migrations.length; undone > mine; undone -= 1) await source.undoLastMigration({ transaction: 'each' });
     const left = await source.query(
       `SELECT "name" FROM "sqlite_master" WHERE "name" LIKE 'spring_rate_search%' OR "name" IN ('idx_spring_rate_family_rate', 'idx_spring_rate_kind_rate', 'idx_spring_rate_low_stock')`,
     );
     expect(left).toEqual([]);
+    await source.destroy();
+  });
+});
+
+describe('the migration that puts the SKU in the sorted indexes', () => {
+  const mine = migrations.indexOf(SearchOrderIndexes1764634500000);
+
+  async function columnsOf(source: DataSource, index: string): Promise<string[]> {
+    const rows: { name: string }[] = await source.query(`SELECT "name" FROM pragma_index_info('${index}') ORDER BY "seqno"`);
+    return rows.map((r) => r.name);
+  }
+
+  test('up adds the SKU (and the id where `active` follows) and down puts the indexes back as they were', async () => {
+    expect(mine).toBeGreaterThan(0);
+    const source = new DataSource({ ...dataSourceOptions(path.join(tempDir(), DATABASE_FILE)), migrations: migrations.slice(0, mine + 1) });
+    await source.initialize();
+    await source.runMigrations({ transaction: 'each' });
+    expect(await columnsOf(source, 'idx_spring_rate_fit')).toEqual(['kind', 'family', 'rateNmm', 'sku']);
+    expect(await columnsOf(source, 'idx_spring_rate_kind_rate')).toEqual(['kind', 'rateNmm', 'sku']);
+    expect(await columnsOf(source, 'idx_spring_rate_family_rate')).toEqual(['family', 'rateNmm', 'sku', 'id', 'active']);
+    await source.undoLastMigration({ transaction: 'each' });
+    expect(await columnsOf(source, 'idx_spring_rate_fit')).toEqual(['kind', 'family', 'rateNmm']);
+    expect(await columnsOf(source, 'idx_spring_rate_kind_rate')).toEqual(['kind', 'rateNmm']);
+    expect(await columnsOf(source, 'idx_spring_rate_family_rate')).toEqual(['family', 'rateNmm', 'active']);
     await source.destroy();
   });
 });

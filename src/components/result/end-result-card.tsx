@@ -94,7 +94,7 @@ export function EndResultCard({ result }: { result: EndResult }) {
           <Quantity value={result.installedRateNmm} kind="rate" testID={id('installed-rate')} />
         </Figure>
         {result.idealRateNmm !== null && (
-          <Figure label="Ideal for you">
+          <Figure label="Ideal rate">
             <Quantity value={result.idealRateNmm} kind="rate" testID={id('ideal-rate')} />
           </Figure>
         )}

@@ -1,4 +1,4 @@
-import { Link, router, useLocalSearchParams } from 'expo-router';
+import { Link, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -16,7 +16,7 @@ import { ThemedText } from '@/components/ui/themed-text';
 import { formatQuantity } from '@/components/units/format';
 import { useBikeModels } from '@/hooks/use-bike-models';
 import { useCustomerBikes, useCustomerWeighIn } from '@/hooks/use-customers';
-import { createQuote } from '@/hooks/use-quote';
+import { useMakeQuote } from '@/hooks/use-make-quote';
 import { useBikeRecords } from '@/hooks/use-sizing-records';
 import { useTargetProfiles } from '@/hooks/use-target-profiles';
 import { useUnits } from '@/hooks/use-units';
@@ -176,20 +176,7 @@ function describeEnd(label: string, end: SizingRecordSummary['front'], units: Di
 function RecordRow({ record }: { record: SizingRecordSummary }) {
   const { spacing } = useTheme();
   const { units } = useUnits();
-  const [making, setMaking] = useState(false);
-  const [problem, setProblem] = useState<string | null>(null);
-  async function make() {
-    setMaking(true);
-    setProblem(null);
-    try {
-      const quote = await createQuote(record.id);
-      router.push(`/desk/quotes/${quote.id}`);
-    } catch (cause) {
-      setProblem(cause instanceof Error ? cause.message : 'The quote could not be made.');
-    } finally {
-      setMaking(false);
-    }
-  }
+  const { making, problem, makeQuote } = useMakeQuote(record.id);
   const ends = [describeEnd('Fork', record.front, units), describeEnd('Shock', record.rear, units)].filter(Boolean).join(' · ');
   return (
     <View role="listitem" style={[styles.row, { gap: spacing.md }]} testID={`sizing-record-${record.id}`}>
@@ -204,7 +191,7 @@ function RecordRow({ record }: { record: SizingRecordSummary }) {
           </ThemedText>
         )}
       </View>
-      <Button label={making ? 'Making…' : 'Make a quote'} disabled={making} onPress={() => void make()} />
+      <Button label={making ? 'Making…' : 'Make a quote'} disabled={making} onPress={() => void makeQuote()} />
     </View>
   );
 }

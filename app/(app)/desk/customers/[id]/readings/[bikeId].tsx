@@ -2,7 +2,7 @@
  * A customer's bike on the shop's bench: the desk takes the three lengths of each end, the
  * engine sizes them with the customer's weigh-in, and the saved result can become a quote at once.
  */
-import { router, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { View } from 'react-native';
 
@@ -16,7 +16,7 @@ import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useCustomerBikes, useCustomerWeighIn } from '@/hooks/use-customers';
-import { createQuote } from '@/hooks/use-quote';
+import { useMakeQuote } from '@/hooks/use-make-quote';
 import { useUnits } from '@/hooks/use-units';
 import { useLayout, useTheme } from '@/theme';
 import { endsOf } from '@shared/garage/build-sizing-request';
@@ -81,20 +81,8 @@ export default function ShopReadingsScreen() {
 function SavedResult({ record, onAgain }: { record: SizingRecord; onAgain: () => void }) {
   const { spacing } = useTheme();
   const { isWide } = useLayout();
-  const [making, setMaking] = useState(false);
-  const [problem, setProblem] = useState<string | null>(null);
+  const { making, problem, makeQuote } = useMakeQuote(record.id, { staysBusyAfterOpening: true });
   const ends = [record.result.front, record.result.rear].filter((end) => end !== undefined);
-  async function makeQuote() {
-    setMaking(true);
-    setProblem(null);
-    try {
-      const quote = await createQuote(record.id);
-      router.push(`/desk/quotes/${quote.id}`);
-    } catch (cause) {
-      setProblem(cause instanceof Error ? cause.message : 'The quote could not be made.');
-      setMaking(false);
-    }
-  }
   return (
     <>
       <Card tone="success" testID="readings-saved">

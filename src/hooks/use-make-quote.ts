@@ -3,16 +3,11 @@ import { useState } from 'react';
 
 import { createQuote } from '@/hooks/use-quote';
 
-type MakeQuoteOptions = {
-  /** Leave the buttons disabled once the quote has opened, so the desk cannot quote the same fresh result twice on coming back. */
-  staysBusyAfterOpening?: boolean;
-};
-
 /**
  * Makes a draft quote from a saved sizing record and opens it. `making` disables the buttons
  * while the server works; `problem` is its reason when it refuses.
  */
-export function useMakeQuote(sizingRecordId: number, { staysBusyAfterOpening = false }: MakeQuoteOptions = {}) {
+export function useMakeQuote(sizingRecordId: number) {
   const [making, setMaking] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   async function makeQuote() {
@@ -21,9 +16,10 @@ export function useMakeQuote(sizingRecordId: number, { staysBusyAfterOpening = f
     try {
       const quote = await createQuote(sizingRecordId);
       router.push(`/desk/quotes/${quote.id}`);
-      if (!staysBusyAfterOpening) setMaking(false);
     } catch (cause) {
       setProblem(cause instanceof Error ? cause.message : 'The quote could not be made.');
+    } finally {
+      // The screen stays in the stack: coming back to it, the desk can make another quote.
       setMaking(false);
     }
   }

@@ -81,7 +81,7 @@ export default function ShopReadingsScreen() {
 function SavedResult({ record, onAgain }: { record: SizingRecord; onAgain: () => void }) {
   const { spacing } = useTheme();
   const { isWide } = useLayout();
-  const { making, problem, makeQuote } = useMakeQuote(record.id, { staysBusyAfterOpening: true });
+  const { making, problem, makeQuote } = useMakeQuote(record.id);
   const ends = [record.result.front, record.result.rear].filter((end) => end !== undefined);
   return (
     <>

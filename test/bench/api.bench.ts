@@ -3,11 +3,10 @@
  * same server process (`api-server.ts`), at 10 and at 100 connections, `BENCH_SECONDS` (10) each.
  * autocannon runs in this process and the server in its own, so on two cores each has one.
  */
-import { ChildProcess, spawn } from 'node:child_process';
-import path from 'node:path';
 import autocannon from 'autocannon';
 import { DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import body from '../server/fixtures/sizing-two-ends.json';
+import { startChildServer } from '../support/child-server';
 import { BenchRow, formatLatency, Latency, summariseLatencies } from './measure';
 
 const RIDER_EMAIL = 'rider@demo.test';
@@ -18,27 +17,9 @@ interface BenchServer {
   stop: () => Promise<void>;
 }
 
-function startBenchServer(): Promise<BenchServer> {
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', path.join(__dirname, 'api-server.ts')], {
-    cwd: path.resolve(__dirname, '../..'),
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let output = '';
-  child.stderr?.on('data', (chunk) => (output += chunk));
-  const stop = () =>
-    new Promise<void>((resolve) => {
-      if (child.exitCode !== null || child.signalCode !== null) return resolve();
-      child.once('exit', () => resolve());
-      child.kill('SIGTERM');
-    });
-  return new Promise((resolve, reject) => {
-    child.stdout?.on('data', (chunk: Buffer) => {
-      output += chunk;
-      const match = /\{"port":(\d+)\}/.exec(output);
-      if (match) resolve({ url: `http://127.0.0.1:${match[1]}`, stop });
-    });
-    child.once('exit', (code) => reject(new Error(`the bench server exited with ${code}:\n${output}`)));
-  });
+async function startBenchServer(): Promise<BenchServer> {
+  const server = await startChildServer({ script: 'test/bench/api-server.ts', portLine: /\{"port":(\d+)\}/ });
+  return { url: `http://127.0.0.1:${server.port}`, stop: server.stop };
 }
 
 async function signIn(url: string): Promise<string> {

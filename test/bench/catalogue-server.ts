@@ -3,10 +3,9 @@
  * filled, on a free loopback port, so its memory is its own and can be read from /proc: VmHWM is
  * the peak resident set since the process started (proc(5)).
  */
-import { ChildProcess, spawn } from 'node:child_process';
 import fs from 'node:fs';
-import path from 'node:path';
 import { DEMO_PASSWORD } from '../../server/seed/demo-accounts';
+import { startChildServer } from '../support/child-server';
 
 export interface ServerProcess {
   url: string;
@@ -16,8 +15,6 @@ export interface ServerProcess {
   cpuSeconds: () => number;
   stop: () => Promise<void>;
 }
-
-const root = path.resolve(__dirname, '../..');
 
 // Clock ticks per second for /proc/<pid>/stat: USER_HZ, 100 on Linux (proc(5), sysconf(_SC_CLK_TCK)).
 const USER_HZ = 100;
@@ -35,31 +32,19 @@ function readStatusKb(pid: number, field: 'VmHWM' | 'VmRSS'): number {
   return Number(match[1]);
 }
 
-export function startServerProcess(dataDir: string): Promise<ServerProcess> {
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    cwd: root,
-    env: { ...process.env, NODE_ENV: 'test', PORT: '0', DATA_DIR: dataDir, SAGWRIGHT_DEMO: '1' },
-    stdio: ['ignore', 'pipe', 'pipe'],
+export async function startServerProcess(dataDir: string): Promise<ServerProcess> {
+  const server = await startChildServer({
+    script: 'server/index.ts',
+    env: { NODE_ENV: 'test', PORT: '0', DATA_DIR: dataDir, SAGWRIGHT_DEMO: '1' },
+    portLine: /running at http:\/\/localhost:(\d+)/,
   });
-  let output = '';
-  child.stderr?.on('data', (chunk) => (output += chunk));
-  const stop = () =>
-    new Promise<void>((resolve) => {
-      if (child.exitCode !== null || child.signalCode !== null) return resolve();
-      child.once('exit', () => resolve());
-      child.kill('SIGTERM');
-    });
-  const pid = child.pid;
-  if (pid === undefined) throw new Error('the server process did not start');
-  const memory = () => ({ peakBytes: readStatusKb(pid, 'VmHWM') * 1024, residentBytes: readStatusKb(pid, 'VmRSS') * 1024 });
-  return new Promise((resolve, reject) => {
-    child.stdout?.on('data', (chunk: Buffer) => {
-      output += chunk;
-      const match = /running at http:\/\/localhost:(\d+)/.exec(output);
-      if (match) resolve({ url: `http://127.0.0.1:${match[1]}`, memory, cpuSeconds: () => readCpuSeconds(pid), stop });
-    });
-    child.once('exit', (code) => reject(new Error(`the server exited with ${code}:\n${output}`)));
-  });
+  const { pid } = server;
+  return {
+    url: `http://127.0.0.1:${server.port}`,
+    memory: () => ({ peakBytes: readStatusKb(pid, 'VmHWM') * 1024, residentBytes: readStatusKb(pid, 'VmRSS') * 1024 }),
+    cpuSeconds: () => readCpuSeconds(pid),
+    stop: server.stop,
+  };
 }
 
 /** An access token for a demo account. */

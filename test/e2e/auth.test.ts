@@ -8,12 +8,10 @@
  * file stays within them: per e-mail at most 6 of the 10 sign-ins per 15 minutes, 2 of the 5
  * sign-ups per hour, and 4 of the 5 reset calls per 15 minutes.
  */
-import { Browser } from 'playwright-core';
-
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import { currentNavLink, navLinkNames, openMailLink, signInThroughForm, waitForPath } from './auth-helpers';
-import { launchBrowser, openPage, screenshot, viewports, ViewportName } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot, viewports, ViewportName } from './browser';
+import { startLiveAppForFile } from './live-app';
 
 /** What each role's navigation offers and the heading of the area it lands on. */
 const AREAS = {
@@ -26,24 +24,14 @@ const AREAS = {
 const rider = DEMO_ACCOUNTS.find((account) => account.role === 'rider')!;
 const admin = DEMO_ACCOUNTS.find((account) => account.role === 'admin')!;
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = startLiveAppForFile();
 
 describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (size) => {
   test.each(DEMO_ACCOUNTS.map((account) => [account.role, account] as const))(
     'the %s signs in and lands on its own area',
     async (role, account) => {
-      const { page, errors, context } = await openPage(browser, size);
-      await page.goto(`${server.url}/sign-in`);
+      const { page, errors, context } = await openPage(live.browser, size);
+      await page.goto(`${live.server.url}/sign-in`);
       await signInThroughForm(page, account.email, DEMO_PASSWORD);
 
       await waitForPath(page, `/${role}`);
@@ -65,7 +53,7 @@ describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (
         await screenshot(page, `auth-admin-users-${size}`);
       } else {
         // Another role's address sends the person back to their own area.
-        await page.goto(`${server.url}/admin/users`);
+        await page.goto(`${live.server.url}/admin/users`);
         await waitForPath(page, `/${role}`);
       }
 
@@ -75,8 +63,8 @@ describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (
   );
 
   test('a reload keeps the session and signing out ends it', async () => {
-    const { page, errors, context } = await openPage(browser, size);
-    await page.goto(`${server.url}/sign-in`);
+    const { page, errors, context } = await openPage(live.browser, size);
+    await page.goto(`${live.server.url}/sign-in`);
     await signInThroughForm(page, rider.email, DEMO_PASSWORD);
     await waitForPath(page, '/rider');
 
@@ -89,7 +77,7 @@ describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (
     expect(await navLinkNames(page)).toEqual(['Home', 'Sign in']);
 
     // The server cleared the cookie: a reload finds no session to restore.
-    await page.goto(`${server.url}/rider`);
+    await page.goto(`${live.server.url}/rider`);
     await waitForPath(page, '/sign-in', `?next=${encodeURIComponent('/rider')}`);
     await screenshot(page, `auth-signed-out-${size}`);
     expect(errors).toEqual([]);
@@ -97,8 +85,8 @@ describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (
   });
 
   test('a protected address leads through sign-in and back to it', async () => {
-    const { page, errors, context } = await openPage(browser, size);
-    await page.goto(`${server.url}/admin/users`);
+    const { page, errors, context } = await openPage(live.browser, size);
+    await page.goto(`${live.server.url}/admin/users`);
     await waitForPath(page, '/sign-in', `?next=${encodeURIComponent('/admin/users')}`);
     await page.getByText('That page needs an account.', { exact: false }).waitFor();
     await screenshot(page, `auth-sign-in-${size}`);
@@ -120,9 +108,9 @@ describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (
     const newcomer = { name: `Tess Varga ${size}`, email: `tess-${size}@example.test` };
     const firstPassword = 'gravel road at dawn';
     const newPassword = 'switchbacks in the rain';
-    const { page, errors, context } = await openPage(browser, size);
+    const { page, errors, context } = await openPage(live.browser, size);
 
-    await page.goto(server.url);
+    await page.goto(live.server.url);
     await page.getByRole('link', { name: 'Create an account' }).click();
     await page.getByRole('heading', { name: 'Create an account', level: 1 }).waitFor();
     await page.getByLabel('Name').fill(newcomer.name);
@@ -142,12 +130,12 @@ describe.each(Object.keys(viewports) as ViewportName[])('accounts at %s size', (
     await screenshot(page, `auth-reset-requested-${size}`);
 
     // The admin reads the mail in the outbox screen, in a browser of their own.
-    const desk = await openPage(browser, size);
-    await desk.page.goto(`${server.url}/admin/outbox`);
+    const desk = await openPage(live.browser, size);
+    await desk.page.goto(`${live.server.url}/admin/outbox`);
     await signInThroughForm(desk.page, admin.email, DEMO_PASSWORD);
     await waitForPath(desk.page, '/admin/outbox');
     const link = await openMailLink(desk.page, 'Reset your Sagwright password', newcomer.email);
-    expect(link.startsWith(`${server.url}/reset?token=`)).toBe(true);
+    expect(link.startsWith(`${live.server.url}/reset?token=`)).toBe(true);
     await screenshot(desk.page, `auth-outbox-mail-${size}`);
     expect(desk.errors).toEqual([]);
     await desk.context.close();

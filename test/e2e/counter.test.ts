@@ -7,12 +7,12 @@
  */
 import fs from 'node:fs';
 
-import { Browser, Page } from 'playwright-core';
+import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import { signInThroughForm, waitForPath } from './auth-helpers';
-import { launchBrowser, openPage, screenshot, ViewportName } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot, ViewportName } from './browser';
+import { startLiveAppForFile } from './live-app';
 
 const clerk = DEMO_ACCOUNTS.find((account) => account.role === 'counter')!;
 
@@ -20,21 +20,11 @@ const HEADER = 'sku,kind,family,rate_n_mm,free_length_mm,max_deflection_mm,on_ha
 const BAD_CSV = `${HEADER}\nKF37-E2E1,fork,F37x320,9.25,320,190,2,1\nKF37-E2E2,fork,F37x320,lots,320,190,1,1\n`;
 const GOOD_CSV = `${HEADER}\nKF37-E2E1,fork,F37x320,9.25,320,190,2,1\nKF37-E2E2,fork,F37x320,9.75,320,190,1,1\n`;
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = startLiveAppForFile();
 
 async function signIn(size: ViewportName) {
-  const watched = await openPage(browser, size);
-  await watched.page.goto(`${server.url}/sign-in`);
+  const watched = await openPage(live.browser, size);
+  await watched.page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(watched.page, clerk.email, DEMO_PASSWORD);
   await waitForPath(watched.page, '/counter');
   await watched.page.getByRole('heading', { name: 'Spring catalogue', level: 1 }).waitFor();
@@ -82,7 +72,7 @@ test('the clerk searches by rate, receives stock and imports a CSV (wide)', asyn
   await page.getByText('Delivery note 4711').first().waitFor();
   await screenshot(page, 'counter-spring-wide');
 
-  await page.goto(`${server.url}/counter/import`);
+  await page.goto(`${live.server.url}/counter/import`);
   await page.getByRole('heading', { name: 'Import a CSV', level: 1 }).waitFor();
   await pickFile(page, /Choose a CSV file/, 'springs.csv', BAD_CSV);
   const badRow = page.getByTestId('import-row-3');
@@ -145,7 +135,7 @@ test('the clerk adds a spring by hand, receives its opening stock and finds it i
   await ledger.waitFor();
   await screenshot(page, 'counter-movements-phone');
 
-  await page.goto(`${server.url}/counter`);
+  await page.goto(`${live.server.url}/counter`);
   await page.getByLabel('Search springs').fill('HAND');
   await page.getByLabel('Search springs').press('Enter');
   await page.getByTestId('spring-card-KS46-HAND').waitFor();
@@ -163,7 +153,7 @@ test('the catalogue and a spring read on a phone', async () => {
   await page.getByText('Stock history').waitFor();
   await screenshot(page, 'counter-spring-phone');
 
-  await page.goto(`${server.url}/counter/low-stock`);
+  await page.goto(`${live.server.url}/counter/low-stock`);
   await page.getByRole('heading', { name: 'Low stock', level: 1 }).waitFor();
   await page.getByRole('table', { name: 'Re-order sheet' }).waitFor();
   await screenshot(page, 'counter-low-stock-phone');
@@ -171,14 +161,14 @@ test('the catalogue and a spring read on a phone', async () => {
   await screenshot(page, 'counter-low-stock-print');
   await page.emulateMedia({ media: 'screen' });
 
-  await page.goto(`${server.url}/counter/rates`);
+  await page.goto(`${live.server.url}/counter/rates`);
   await page.getByRole('radio', { name: /^F37x320/ }).click();
   await page.getByLabel(/Target rate/).fill('9.2');
   await page.getByRole('button', { name: 'Find rates' }).click();
   await page.getByRole('list', { name: 'Nearest rates' }).getByText(/KF37-0090/).waitFor();
   await screenshot(page, 'counter-rates-phone');
 
-  await page.goto(`${server.url}/counter/identify`);
+  await page.goto(`${live.server.url}/counter/identify`);
   await page.getByText(/Measure a spring only when it is off the bike and unloaded/).waitFor();
   await page.getByLabel('Wire diameter, mm', { exact: true }).fill('4.6');
   await page.getByLabel('Outer diameter, mm', { exact: true }).fill('37');

@@ -15,14 +15,15 @@
  * 600 − (586 + 592) / 2 = 11 mm at the shock; rider sag 560 − (512 + 520) / 2 = 44 mm and
  * 600 − (541 + 549) / 2 = 55 mm.
  */
-import { Browser, Page } from 'playwright-core';
+import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import { formatNumber } from '../../shared/sizing/format';
 import type { QuoteView, SpringOption } from '../../shared/types/quote';
+import { apiFor } from './api-helpers';
 import { signInThroughForm, waitForPath } from './auth-helpers';
-import { launchBrowser, openPage, screenshot, type ViewportName } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot, type ViewportName } from './browser';
+import { startLiveAppForFile } from './live-app';
 
 jest.setTimeout(300_000);
 
@@ -36,32 +37,8 @@ const READINGS = {
   rear: { extended: '600', static: ['586', '592'], rider: ['541', '549'] },
 } as const;
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-/** A JSON request to the API; fails the test on any error answer. */
-async function call<T>(method: string, path: string, token?: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${server.url}/api${path}`, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
-    ...(body !== undefined && { body: JSON.stringify(body) }),
-  });
-  const text = await response.text();
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${text}`);
-  return JSON.parse(text) as T;
-}
-
-const signInApi = async (email: string) =>
-  (await call<{ token: string }>('POST', '/auth/sign-in', undefined, { email, password: DEMO_PASSWORD })).token;
+const live = startLiveAppForFile();
+const { call, signInApi } = apiFor(live);
 
 const WEIGH_IN = { bodyKg: 82, gear: {}, loads: [], discipline: 'road', position: 'neutral' };
 
@@ -111,8 +88,8 @@ async function nextQuoteLink(known: readonly string[]): Promise<string> {
 const visible = (page: Page, id: string) => page.locator(`[data-testid="${id}"]:visible`);
 
 async function signedIn(size: ViewportName, email: string, landing: string) {
-  const watched = await openPage(browser, size);
-  await watched.page.goto(`${server.url}/sign-in`);
+  const watched = await openPage(live.browser, size);
+  await watched.page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(watched.page, email, DEMO_PASSWORD);
   await waitForPath(watched.page, landing);
   return watched;
@@ -153,7 +130,7 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   const customerId = await riderId(deskToken);
 
   const wide = await signedIn('wide', desk.email, '/desk');
-  await wide.page.goto(`${server.url}/desk/customers/${customerId}?name=${encodeURIComponent(rider.name)}`);
+  await wide.page.goto(`${live.server.url}/desk/customers/${customerId}?name=${encodeURIComponent(rider.name)}`);
   await visible(wide.page, `size-from-readings-${bikeId}`).click();
   await wide.page.waitForURL((url) => url.pathname === `/desk/customers/${customerId}/readings/${bikeId}`);
   await wide.page.getByRole('heading', { name: 'Readings: Bench bike', level: 1 }).waitFor();
@@ -225,8 +202,8 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   const booked = await call<{ quote: QuoteView }>('GET', `/quotes/${secondId}`, deskToken);
   expect(booked.quote.fittingAt).toBe(chosen.toISOString());
 
-  const customer = await openPage(browser, 'phone');
-  await customer.page.goto(`${server.url}${link}`);
+  const customer = await openPage(live.browser, 'phone');
+  await customer.page.goto(`${live.server.url}${link}`);
   await visible(customer.page, 'fitting-time').waitFor();
   const shown = await visible(customer.page, 'fitting-time').innerText();
   expect(shown).toContain('Fitting booked');
@@ -244,7 +221,7 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   expect(wide.errors).toEqual([]);
 
   const riderPage = await signedIn('phone', rider.email, '/rider');
-  await riderPage.page.goto(`${server.url}/rider/bikes/${bikeId}/log`);
+  await riderPage.page.goto(`${live.server.url}/rider/bikes/${bikeId}/log`);
   await riderPage.page.getByRole('heading', { name: 'Setup log', level: 1 }).waitFor();
   await riderPage.page.getByText(`Spring swap, quote ${fitted.quote.number} v2`).waitFor();
   await riderPage.page.getByText(new RegExp(`^Front spring .* → ${formatNumber(forkSpring.rateNmm, 1)} N/mm$`)).waitFor();
@@ -265,7 +242,7 @@ test('a paid quote cancelled at the desk shows the deposit refunded', async () =
   expect(paid.quote.paidCents).toBeGreaterThan(0);
 
   const phone = await signedIn('phone', desk.email, '/desk');
-  await phone.page.goto(`${server.url}/desk/quotes/${draft.id}`);
+  await phone.page.goto(`${live.server.url}/desk/quotes/${draft.id}`);
   await visible(phone.page, 'quote-status').getByText('Deposit paid').waitFor();
   await phone.page.getByRole('button', { name: 'Cancel the quote' }).click();
   await visible(phone.page, 'quote-status').getByText('Cancelled').waitFor();
@@ -302,7 +279,7 @@ describe.each(['phone', 'wide'] as const)('the desk screens at %s size', (size) 
       await screenshot(page, 'desk-board-columns-wide');
     }
 
-    await page.goto(`${server.url}/desk/customers/${customerId}?name=${encodeURIComponent(rider.name)}`);
+    await page.goto(`${live.server.url}/desk/customers/${customerId}?name=${encodeURIComponent(rider.name)}`);
     await visible(page, `customer-bike-${bikeId}`).waitFor();
     await screenshot(page, `desk-customer-page-${size}`);
 
@@ -310,7 +287,7 @@ describe.each(['phone', 'wide'] as const)('the desk screens at %s size', (size) 
     await page.getByRole('heading', { name: `Readings: Screens bike ${size}`, level: 1 }).waitFor();
     await screenshot(page, `desk-readings-${size}`);
 
-    await page.goto(`${server.url}/desk/quotes/${draft.id}`);
+    await page.goto(`${live.server.url}/desk/quotes/${draft.id}`);
     await page.getByRole('heading', { name: `Quote ${draft.number}`, level: 1 }).waitFor();
     await visible(page, 'total-total').waitFor();
     await page.locator('[role="button"][aria-label^="Add KF"]:visible').first().waitFor();

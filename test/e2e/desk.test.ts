@@ -6,12 +6,13 @@
  * the card that pays and sees the receipt. Nothing may log an error, so no step asks for
  * something the server would refuse.
  */
-import { Browser, Page } from 'playwright-core';
+import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
+import { apiFor } from './api-helpers';
 import { signInThroughForm, waitForPath } from './auth-helpers';
-import { launchBrowser, openPage, screenshot } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot } from './browser';
+import { startLiveAppForFile } from './live-app';
 
 jest.setTimeout(240_000);
 
@@ -20,32 +21,8 @@ const rider = account('rider');
 const desk = account('desk');
 const admin = account('admin');
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-/** A JSON request to the API with the given access token; fails the test on any error answer. */
-async function call<T>(method: string, path: string, token?: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${server.url}/api${path}`, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
-    ...(body !== undefined && { body: JSON.stringify(body) }),
-  });
-  const text = await response.text();
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${text}`);
-  return JSON.parse(text) as T;
-}
-
-const signInApi = async (email: string) =>
-  (await call<{ token: string }>('POST', '/auth/sign-in', undefined, { email, password: DEMO_PASSWORD })).token;
+const live = startLiveAppForFile();
+const { call, signInApi } = apiFor(live);
 
 /** The rider's new bike and a pass sized from the weights alone. */
 async function riderWithPass(): Promise<{ bikeId: number; recordId: number }> {
@@ -89,8 +66,8 @@ const visible = (page: Page, id: string) => page.locator(`[data-testid="${id}"]:
 test('the desk builds and sends a quote; the rider accepts and pays the deposit by card', async () => {
   const { bikeId, recordId } = await riderWithPass();
 
-  const wide = await openPage(browser, 'wide');
-  await wide.page.goto(`${server.url}/sign-in`);
+  const wide = await openPage(live.browser, 'wide');
+  await wide.page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(wide.page, desk.email, DEMO_PASSWORD);
   await waitForPath(wide.page, '/desk');
   await wide.page.getByRole('heading', { name: 'Quotes', level: 1 }).waitFor();
@@ -127,8 +104,8 @@ test('the desk builds and sends a quote; the rider accepts and pays the deposit 
   expect(wide.errors).toEqual([]);
 
   const link = new URL(await quoteLinkFromOutbox());
-  const phone = await openPage(browser, 'phone');
-  await phone.page.goto(`${server.url}${link.pathname}`);
+  const phone = await openPage(live.browser, 'phone');
+  await phone.page.goto(`${live.server.url}${link.pathname}`);
   await phone.page.getByRole('heading', { name: /^Quote Q-/, level: 1 }).waitFor();
   expect(await visible(phone.page, 'total-total').innerText()).toBe(total);
   await phone.page.getByText(/loaded spring stores dangerous energy/).waitFor();

@@ -3,32 +3,21 @@
  * and the browser reports the face as loaded, since a computed font-family alone passes even
  * when the file fails), the client reaches /api/health, and nothing logs an error.
  */
-import { Browser } from 'playwright-core';
-import { launchBrowser, openPage, screenshot, viewports, ViewportName } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot, viewports, ViewportName } from './browser';
+import { startLiveAppForFile } from './live-app';
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = startLiveAppForFile();
 
 describe.each(Object.keys(viewports) as ViewportName[])('home screen at %s size', (size) => {
   test('renders in the shipped fonts, shows the safety notice and reaches the API', async () => {
-    const { page, errors, context } = await openPage(browser, size);
+    const { page, errors, context } = await openPage(live.browser, size);
     const fontResponses: { url: string; status: number }[] = [];
     page.on('response', (res) => {
       if (/\.ttf(\?|$)/.test(res.url())) fontResponses.push({ url: res.url(), status: res.status() });
     });
     const health = page.waitForResponse((res) => res.url().endsWith('/api/health'));
 
-    await page.goto(server.url);
+    await page.goto(live.server.url);
     expect((await health).status()).toBe(200);
 
     const heading = page.getByRole('heading', { name: 'Sagwright' }).first();

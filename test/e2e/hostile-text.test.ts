@@ -5,12 +5,13 @@
  * list and the counter's spring page show them. Each must appear as literal text, no dialog may
  * open, no handler of the payload may run, and no element of the payload may be in the page.
  */
-import { Browser, Page } from 'playwright-core';
+import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
+import { apiFor } from './api-helpers';
 import { signInThroughForm, waitForPath } from './auth-helpers';
-import { launchBrowser, openPage, screenshot } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot } from './browser';
+import { startLiveAppForFile } from './live-app';
 
 jest.setTimeout(240_000);
 
@@ -24,27 +25,12 @@ const RIDER_PASSWORD = 'a long enough password';
 
 const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 
-let server: RunningServer;
-let browser: Browser;
+const live = startLiveAppForFile();
+const { call, signInApi } = apiFor(live);
 let bikeId: number;
 let springId: number;
 
-async function call<T>(method: string, path: string, token?: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${server.url}/api${path}`, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
-    ...(body !== undefined && { body: JSON.stringify(body) }),
-  });
-  const text = await response.text();
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${text}`);
-  return JSON.parse(text) as T;
-}
-
-const signInApi = async (email: string, password = DEMO_PASSWORD) => (await call<{ token: string }>('POST', '/auth/sign-in', undefined, { email, password })).token;
-
 beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
   const { token } = await call<{ token: string }>('POST', '/auth/sign-up', undefined, { name: SCRIPT_NAME, email: RIDER_EMAIL, password: RIDER_PASSWORD });
   const { models } = await call<{ models: { id: number }[] }>('GET', '/bike-models', token);
   ({ bike: { id: bikeId } } = await call<{ bike: { id: number } }>('POST', '/bikes', token, { modelId: models[0].id, nickname: IMG_BIKE }));
@@ -61,14 +47,10 @@ beforeAll(async () => {
     supplier: SCRIPT_NAME,
   }));
 });
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
 
 /** A phone-sized page that records every dialog (and dismisses it, so a payload cannot stall the test). */
 async function phonePage() {
-  const watched = await openPage(browser, 'phone');
+  const watched = await openPage(live.browser, 'phone');
   const dialogs: string[] = [];
   watched.page.on('dialog', (dialog) => {
     dialogs.push(dialog.message());
@@ -98,12 +80,12 @@ async function expectOnlyText(page: Page, dialogs: string[], texts: string[]) {
 
 test("the rider's garage shows a bike named with an img tag as text", async () => {
   const { page, dialogs, errors } = await phonePage();
-  await page.goto(`${server.url}/sign-in`);
+  await page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(page, RIDER_EMAIL, RIDER_PASSWORD);
   await waitForPath(page, '/rider');
   await expectOnlyText(page, dialogs, [IMG_BIKE]);
   await screenshot(page, 'hostile-text-garage-phone');
-  await page.goto(`${server.url}/rider/bikes/${bikeId}`);
+  await page.goto(`${live.server.url}/rider/bikes/${bikeId}`);
   await expectOnlyText(page, dialogs, [IMG_BIKE]);
   await screenshot(page, 'hostile-text-bike-phone');
   expect(errors).toEqual([]);
@@ -111,10 +93,10 @@ test("the rider's garage shows a bike named with an img tag as text", async () =
 
 test("the desk's customer list shows a rider and a walk-in named with tags as text", async () => {
   const { page, dialogs, errors } = await phonePage();
-  await page.goto(`${server.url}/sign-in`);
+  await page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(page, account('desk').email, DEMO_PASSWORD);
   await waitForPath(page, '/desk');
-  await page.goto(`${server.url}/desk/customers`);
+  await page.goto(`${live.server.url}/desk/customers`);
   await page.getByLabel('Search by name or e-mail').fill('hostile');
   await expectOnlyText(page, dialogs, [SCRIPT_NAME, IMG_CUSTOMER]);
   await screenshot(page, 'hostile-text-customers-phone');
@@ -123,10 +105,10 @@ test("the desk's customer list shows a rider and a walk-in named with tags as te
 
 test("the counter's spring page shows an SKU and a family that are tags as text", async () => {
   const { page, dialogs, errors } = await phonePage();
-  await page.goto(`${server.url}/sign-in`);
+  await page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(page, account('counter').email, DEMO_PASSWORD);
   await waitForPath(page, '/counter');
-  await page.goto(`${server.url}/counter/springs/${springId}`);
+  await page.goto(`${live.server.url}/counter/springs/${springId}`);
   await page.getByRole('heading', { name: SVG_SKU, level: 1 }).waitFor();
   await expectOnlyText(page, dialogs, [SVG_SKU, SCRIPT_FAMILY]);
   await screenshot(page, 'hostile-text-spring-phone');

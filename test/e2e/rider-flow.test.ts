@@ -7,15 +7,16 @@
  *
  * Hand-worked check: static sag = extended − mean(pushed, lifted) = 560 − (532 + 540) / 2 = 24 mm.
  */
-import { Browser, Page } from 'playwright-core';
+import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import { formatNumber } from '../../shared/sizing/format';
 import type { SizingRecord } from '../../shared/types/garage';
 import type { EndResult, SizingResult } from '../../shared/types/sizing';
+import { apiFor } from './api-helpers';
 import { signInThroughForm, waitForPath } from './auth-helpers';
-import { launchBrowser, openPage, screenshot } from './browser';
-import { RunningServer, startServer } from './server-process';
+import { openPage, screenshot } from './browser';
+import { startLiveAppForFile } from './live-app';
 
 jest.setTimeout(240_000);
 
@@ -34,22 +35,13 @@ const REMEASURE: Record<'front' | 'rear', EndReadings> = {
   rear: { extended: '600', static: ['588', '594'], rider: ['551', '557'] },
 };
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const live = startLiveAppForFile();
+const { call, signInApi } = apiFor(live);
 
 const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]:visible`);
 
 async function signIn(page: Page) {
-  await page.goto(`${server.url}/sign-in`);
+  await page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(page, rider.email, DEMO_PASSWORD);
   await waitForPath(page, '/rider');
   await page.getByRole('heading', { name: 'Garage', level: 1 }).waitFor();
@@ -73,20 +65,10 @@ async function measureEnd(page: Page, end: 'front' | 'rear', values: EndReadings
   }
 }
 
-async function apiToken(): Promise<string> {
-  const response = await fetch(`${server.url}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: rider.email, password: DEMO_PASSWORD }),
-  });
-  return ((await response.json()) as { token: string }).token;
-}
-
 async function engineAnswer(recordId: number): Promise<SizingResult> {
-  const headers = { Authorization: `Bearer ${await apiToken()}`, 'Content-Type': 'application/json' };
-  const { record } = (await (await fetch(`${server.url}/api/sizing-records/${recordId}`, { headers })).json()) as { record: SizingRecord };
-  const answer = await fetch(`${server.url}/api/sizing`, { method: 'POST', headers, body: JSON.stringify(record.request) });
-  return (await answer.json()) as SizingResult;
+  const token = await signInApi(rider.email);
+  const { record } = await call<{ record: SizingRecord }>('GET', `/sizing-records/${recordId}`, token);
+  return call<SizingResult>('POST', '/sizing', token, record.request);
 }
 
 const mm = (value: number | null) => (value === null ? '–' : `${formatNumber(value, 1)} mm`);
@@ -111,7 +93,7 @@ async function expectFigures(page: Page, result: EndResult) {
 }
 
 test('a rider measures a bike from a shop model, resumes, adjusts and re-measures', async () => {
-  let { page, errors, context } = await openPage(browser, 'phone');
+  let { page, errors, context } = await openPage(live.browser, 'phone');
   await signIn(page);
   await screenshot(page, 'rider-garage-phone');
 
@@ -151,7 +133,7 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   expect(errors).toEqual([]);
   await context.close();
 
-  ({ page, errors, context } = await openPage(browser, 'phone'));
+  ({ page, errors, context } = await openPage(live.browser, 'phone'));
   await signIn(page);
   await byTestId(page, `resume-${bikeId}`).click();
   await page.waitForURL((url) => url.pathname.endsWith('/front-rider'));
@@ -232,33 +214,33 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   await context.close();
 
   // Wide: the first result in two columns, front beside rear.
-  ({ page, errors, context } = await openPage(browser, 'wide'));
-  await page.goto(`${server.url}/sign-in`);
+  ({ page, errors, context } = await openPage(live.browser, 'wide'));
+  await page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(page, rider.email, DEMO_PASSWORD);
   await waitForPath(page, '/rider');
-  await page.goto(`${server.url}/rider/results/${recordId}`);
+  await page.goto(`${live.server.url}/rider/results/${recordId}`);
   await byTestId(page, 'result-front-verdict').waitFor();
   const front = (await byTestId(page, 'result-front').boundingBox())!;
   const rear = (await byTestId(page, 'result-rear').boundingBox())!;
   expect(rear.x).toBeGreaterThan(front.x + front.width - 1);
   expect(Math.abs(rear.y - front.y)).toBeLessThan(2);
   await screenshot(page, 'rider-result-wide');
-  await page.goto(`${server.url}/rider/bikes/${bikeId}/log`);
+  await page.goto(`${live.server.url}/rider/bikes/${bikeId}/log`);
   await byTestId(page, 'log-table').waitFor();
   await screenshot(page, 'rider-setup-log-wide');
-  await page.goto(`${server.url}/rider/results/${recordId}/sheet`);
+  await page.goto(`${live.server.url}/rider/results/${recordId}/sheet`);
   await byTestId(page, 'setup-sheet').waitFor();
   await screenshot(page, 'rider-setup-sheet-wide');
 
   // Imperial: the same stored sag in inches (24 mm / 25.4 = 0.94 in), then back to metric.
-  await page.goto(`${server.url}/rider`);
+  await page.goto(`${live.server.url}/rider`);
   await page.getByRole('radio', { name: 'in · lb' }).click();
-  await page.goto(`${server.url}/rider/results/${recordId}`);
+  await page.goto(`${live.server.url}/rider/results/${recordId}`);
   await byTestId(page, 'result-front-static-sag').filter({ hasText: 'in' }).waitFor();
   expect(await byTestId(page, 'result-front-static-sag').innerText()).toBe('0.94 in');
   expect(await byTestId(page, 'result-rear-installed-rate').innerText()).toBe(`${formatNumber(answer.rear!.installedRateNmm / 0.1751268, 0)} lbf/in`);
   await screenshot(page, 'rider-result-imperial-wide');
-  await page.goto(`${server.url}/rider`);
+  await page.goto(`${live.server.url}/rider`);
   await page.getByRole('radio', { name: 'mm · kg' }).click();
   await page.getByRole('radio', { name: 'N/mm' }).waitFor();
   expect(errors).toEqual([]);
@@ -267,8 +249,8 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
 
 test('the admin opens the shop data editors', async () => {
   const admin = DEMO_ACCOUNTS.find((account) => account.role === 'admin')!;
-  const { page, errors, context } = await openPage(browser, 'wide');
-  await page.goto(`${server.url}/sign-in`);
+  const { page, errors, context } = await openPage(live.browser, 'wide');
+  await page.goto(`${live.server.url}/sign-in`);
   await signInThroughForm(page, admin.email, DEMO_PASSWORD);
   await waitForPath(page, '/admin');
   for (const [path, heading] of [
@@ -284,7 +266,7 @@ test('the admin opens the shop data editors', async () => {
     await page.getByRole('status').waitFor({ state: 'detached' });
     await screenshot(page, `rider-admin-${path}-wide`);
   }
-  await page.goto(`${server.url}/admin/bike-models?edit=1`);
+  await page.goto(`${live.server.url}/admin/bike-models?edit=1`);
   await byTestId(page, 'field-nickname').waitFor();
   await screenshot(page, 'rider-admin-bike-model-edit-wide');
   expect(errors).toEqual([]);

@@ -57,11 +57,3 @@ export async function signIn(url: string, email: string): Promise<string> {
   if (response.status !== 200) throw new Error(`sign-in answered ${response.status}: ${await response.text()}`);
   return ((await response.json()) as { token: string }).token;
 }
-
-/** A GET that must answer 200; the body is read in full, as a client would. */
-export async function getOk(url: string, token?: string): Promise<unknown> {
-  const response = await fetch(url, { headers: token ? { authorization: `Bearer ${token}` } : {} });
-  const body = await response.text();
-  if (response.status !== 200) throw new Error(`GET ${url} answered ${response.status}: ${body.slice(0, 500)}`);
-  return JSON.parse(body);
-}

@@ -1,6 +1,6 @@
 /** The API of a browser test's server, for the set-up a test needs before it opens a page. */
 import { DEMO_PASSWORD } from '../../server/seed/demo-accounts';
-import { call as callAt } from '../server/reliability/shop-api';
+import { call as callAt } from '../support/api-call';
 import { RunningServer } from './server-process';
 
 /** Requests to `live.server`, whose address is read at each call since the server starts in beforeAll. */

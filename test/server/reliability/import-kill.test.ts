@@ -10,7 +10,8 @@
 import fs from 'node:fs';
 import { RunningServer, startServer } from '../../e2e/server-process';
 import { countRows, integrityCheck, ledgerMismatches } from './database-check';
-import { call, signIn, waitForOutput } from './shop-api';
+import { call } from '../../support/api-call';
+import { signIn, waitForOutput } from './shop-api';
 
 jest.setTimeout(150_000);
 

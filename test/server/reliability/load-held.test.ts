@@ -14,7 +14,8 @@ import sizingBody from '../fixtures/sizing-two-ends.json';
 import { RunningServer, startServer } from '../../e2e/server-process';
 import { countRows, integrityCheck, ledgerMismatches } from './database-check';
 import { runLoad, type SequencedRequest } from './load-run';
-import { call, riderPass, sentSpringQuote, signIn, springsForPass } from './shop-api';
+import { call } from '../../support/api-call';
+import { riderPass, sentSpringQuote, signIn, springsForPass } from './shop-api';
 
 jest.setTimeout(180_000);
 

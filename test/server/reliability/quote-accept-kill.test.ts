@@ -9,7 +9,8 @@
 import fs from 'node:fs';
 import { RunningServer, startServer } from '../../e2e/server-process';
 import { countRows, integrityCheck, ledgerMismatches, queryFile } from './database-check';
-import { call, riderPass, sentSpringQuote, signIn, springsForPass, waitForOutput } from './shop-api';
+import { call } from '../../support/api-call';
+import { riderPass, sentSpringQuote, signIn, springsForPass, waitForOutput } from './shop-api';
 
 jest.setTimeout(120_000);
 

@@ -4,17 +4,7 @@
  */
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../../server/seed/demo-accounts';
 import type { Role } from '../../../shared/types/roles';
-
-export async function call<T>(base: string, method: string, path: string, token?: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${base}/api${path}`, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
-    ...(body !== undefined && { body: JSON.stringify(body) }),
-  });
-  const text = await response.text();
-  if (!response.ok) throw new Error(`${method} ${path}: ${response.status} ${text}`);
-  return JSON.parse(text) as T;
-}
+import { call } from '../../support/api-call';
 
 export async function signIn(base: string, role: Role): Promise<string> {
   const account = DEMO_ACCOUNTS.find((a) => a.role === role)!;

@@ -47,7 +47,7 @@ export function toSpringSummary(row: SpringRate, unit: RateUnit): SpringSummary 
 
 /**
  * Adds to the summary in place: a spread of the summary followed by more fields takes V8's slow
- * path for large literals, about 30 µs a row against under 1 µs (a 50-row page cost 2 ms).
+ * path for large literals, about 30 µs a row against under 1 µs (a 60-row page cost 2 ms).
  */
 export function toSpringDetail(row: SpringRate, unit: RateUnit): SpringDetail {
   return Object.assign(toSpringSummary(row, unit), {

@@ -1,6 +1,13 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { upgradeLegacyResult } from '../../shared/sizing/legacy-result';
 import type { EndSummary, SizingSource, WeighIn } from '../../shared/types/garage';
 import type { SizingRequest, SizingResult, TargetProfile } from '../../shared/types/sizing';
+
+/** Stored results stay as their engine made them; read, an older one gains the shape the API answers today. */
+const storedResult = {
+  to: (result: SizingResult) => result,
+  from: (result: SizingResult | null) => (result ? upgradeLegacyResult(result) : result),
+};
 
 /**
  * One saved pass of the sizing engine: the request it ran, its answer, the target profile and the
@@ -37,7 +44,7 @@ export class SizingRecord {
   @Column({ type: 'simple-json' })
   request!: SizingRequest;
 
-  @Column({ type: 'simple-json' })
+  @Column({ type: 'simple-json', transformer: storedResult })
   result!: SizingResult;
 
   @Column({ type: 'simple-json' })

@@ -11,6 +11,7 @@ import { seedDemoBikeModels } from './demo-bike-models';
 import { seedDemoShopSettings } from './demo-shop-settings';
 import { seedDemoCatalogue } from './demo-catalogue';
 import { seedDemoWorkshop } from './demo-workshop';
+import { seedDecisionEngine } from './decision-engine';
 import { seedSizingDefaults } from './sizing-baseline';
 
 interface SeedPart {
@@ -18,7 +19,10 @@ interface SeedPart {
   run: (manager: EntityManager) => Promise<void>;
 }
 
-const baselineParts: SeedPart[] = [{ name: 'sizing-defaults', run: seedSizingDefaults }];
+const baselineParts: SeedPart[] = [
+  { name: 'sizing-defaults', run: seedSizingDefaults },
+  { name: 'decision-engine', run: seedDecisionEngine },
+];
 
 const demoParts: SeedPart[] = [
   { name: 'demo-workshop', run: seedDemoWorkshop },

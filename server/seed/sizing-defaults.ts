@@ -37,14 +37,7 @@ export const targetProfileSeeds: TargetProfile[] = [
     label: 'Touring',
     front: { riderSagPct: [28, 33], staticSagPct: [15, 22] },
     rear: { riderSagPct: [28, 33], staticSagPct: [5, 12] },
-    note: `${PROFILE_NOTE} Road windows, with the luggage counted in the load.`,
-  },
-  {
-    discipline: 'two-up',
-    label: 'Two-up',
-    front: { riderSagPct: [28, 33], staticSagPct: [15, 22] },
-    rear: { riderSagPct: [28, 33], staticSagPct: [5, 12] },
-    note: `${PROFILE_NOTE} Road windows, with the passenger and luggage counted in the load.`,
+    note: `${PROFILE_NOTE} Road windows for the solo rider; luggage and a passenger are load cases that add preload on that spring.`,
   },
   {
     discipline: 'trail',
@@ -62,10 +55,19 @@ export const targetProfileSeeds: TargetProfile[] = [
   },
 ];
 
+/** The settings the one-decision-per-end engine added; a later seed part gives them to installations made before it. */
+export function decisionSettingSeeds(): EngineSettingSeed[] {
+  return [
+    { key: 'staticLoadMismatchPct', value: 20, unit: '%', label: 'Static load from the readings against the weighed one before a warning', source: 'common practice' },
+    { key: 'marginalRatePct', value: 20, unit: '%', label: 'Fitted rate this far off the ideal makes a keep marginal', source: 'common practice' },
+  ];
+}
+
 export const engineSettingSeeds: EngineSettingSeed[] = [
   { key: 'frictionSpreadMm.front', value: 10, unit: 'mm', label: 'Pushed/lifted spread that flags friction, fork', source: 'common practice' },
   { key: 'frictionSpreadMm.rear', value: 5, unit: 'mm', label: 'Pushed/lifted spread that flags friction, shock', source: 'common practice' },
-  { key: 'impliedRateMismatchPct', value: 15, unit: '%', label: 'Implied against stated rate before a warning', source: 'common practice' },
+  { key: 'impliedRateMismatchPct', value: 15, unit: '%', label: 'Implied against stated rate before the answer says to check first', source: 'common practice' },
+  ...decisionSettingSeeds(),
   { key: 'minCaptivePreloadMm', value: 2, unit: 'mm', label: 'Least preload that keeps a spring captive (2-3 mm)', source: 'common practice' },
   { key: 'coilBindMarginMm', value: 3, unit: 'mm', label: 'Spring deflection kept clear of coil-bind at full travel', source: 'from memory' },
   { key: 'adjusterResolution.threaded', value: 0.25, unit: 'turns', label: 'Smallest collar or cap change (a quarter turn)', source: 'common practice' },

@@ -13,7 +13,7 @@ import { toFieldErrors } from '../../shared/schemas/field-errors';
 import { applySetupChange, settingsOf } from '../../shared/setup/settings';
 import type { QuotePage, QuoteStatus, QuoteView, SpringOption } from '../../shared/types/quote';
 import type { SetupChangeInput } from '../../shared/types/setup-log';
-import type { CandidateResult, EndKind } from '../../shared/types/sizing';
+import type { CandidateResult, EndKind, SpringOffer } from '../../shared/types/sizing';
 import { AppContext } from '../context';
 import { pauseForFault } from '../db/fault-pause';
 import { Bike } from '../entities/bike.entity';
@@ -55,15 +55,13 @@ export interface QuoteListQuery {
 
 type LinePlan = Omit<QuoteLine, 'id' | 'quoteId'>;
 
-/** The sizing's pick for an end, whatever its verdict: the best spring in stock, else the best to order. */
-function pickFor(record: SizingRecord, end: EndKind): CandidateResult | null {
-  const recommendation = record.result[end]?.recommendation;
-  return recommendation ? (recommendation.inStock ?? recommendation.best) : null;
-}
-
-/** The spring a swap should fit at an end: none where the sizing says to keep the installed one. */
-function recommendedFor(record: SizingRecord, end: EndKind): CandidateResult | null {
-  return record.result[end]?.verdict === 'keep' ? null : pickFor(record, end);
+/**
+ * The spring the sizing's decision puts forward for an end: the one to fit where it says change,
+ * the better option where it says marginal, none where it says keep or check first. The readings
+ * screen, the result and its print sheet show the same decision.
+ */
+function pickFor(record: SizingRecord, end: EndKind): SpringOffer | null {
+  return record.result[end]?.decision.pick ?? null;
 }
 
 function candidateBySku(record: SizingRecord, end: EndKind, sku: string | null): CandidateResult | null {
@@ -79,7 +77,7 @@ function defaultLineInputs(record: SizingRecord, springs: Map<string, SpringRate
   const lines: QuoteLineInput[] = [];
   const codes = new Set(settings.operations.map((o) => o.code));
   for (const end of ['front', 'rear'] as const) {
-    const pick = recommendedFor(record, end);
+    const pick = pickFor(record, end);
     const spring = pick ? springs.get(pick.sku) : undefined;
     if (!spring) continue;
     lines.push({ kind: 'spring', springId: spring.id, end, quantity: springCountFor(record, end) } as QuoteLineInput);
@@ -248,7 +246,7 @@ export class QuotesService {
     const shop = await loadShop(manager);
     let lineInputs = lines;
     if (!lineInputs) {
-      const skus = (['front', 'rear'] as const).map((end) => recommendedFor(record, end)?.sku).filter((s): s is string => !!s);
+      const skus = (['front', 'rear'] as const).map((end) => pickFor(record, end)?.sku).filter((s): s is string => !!s);
       const springs = skus.length ? await manager.findBy(SpringRate, { sku: In(skus), active: true }) : [];
       lineInputs = defaultLineInputs(record, new Map(springs.map((s) => [s.sku, s])), settings);
     }

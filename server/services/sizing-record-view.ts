@@ -17,6 +17,7 @@ function endSummary(end: EndResult | undefined, request: FrontRequest | RearRequ
     targetRiderSagPct: end.target.riderSagPct,
     targetStaticSagPct: end.target.staticSagPct,
     verdict: end.verdict,
+    decision: end.decision.kind,
     installedRateNmm: end.installedRateNmm,
     preloadMm: request.preloadMm,
     bestRateNmm: end.recommendation.best?.rateNmm ?? null,
@@ -47,9 +48,14 @@ export function toRecordSummary(row: SummaryRow): SizingRecordSummary {
     profileLabel: row.summary.profileLabel,
     engineVersion: row.engineVersion,
     createdAt: row.createdAt.toISOString(),
-    front: row.summary.front,
-    rear: row.summary.rear,
+    front: withDecision(row.summary.front),
+    rear: withDecision(row.summary.rear),
   };
+}
+
+/** Summaries stored before decisions carry none. */
+function withDecision(summary: EndSummary | null): EndSummary | null {
+  return summary && summary.decision === undefined ? { ...summary, decision: null } : summary;
 }
 
 export function toRecordView(row: SizingRecord): SizingRecordView {

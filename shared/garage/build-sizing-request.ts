@@ -57,10 +57,12 @@ export interface SizingInputs {
 }
 
 export function buildSizingRequest({ bike, weighIn, ends, readings = {}, dampingRatio }: SizingInputs): SizingRequest {
+  const totals = totalWeighIn(weighIn);
   return {
     discipline: weighIn.discipline,
     bike: { ...bike.masses },
-    rider: totalWeighIn(weighIn).rider,
+    rider: totals.rider,
+    ...(totals.loadCases.length > 0 ? { loadCases: totals.loadCases } : {}),
     ...(ends.includes('front') && bike.front ? { front: toFrontRequest(bike.front, readings.front) } : {}),
     ...(ends.includes('rear') && bike.rear ? { rear: toRearRequest(bike.rear, readings.rear) } : {}),
     ...(dampingRatio !== undefined ? { dampingRatio } : {}),

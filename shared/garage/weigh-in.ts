@@ -1,6 +1,10 @@
-/** The weigh-in's totals: itemised gear and loads summed into the `rider` part of a sizing request. */
+/**
+ * The weigh-in's totals: the solo rider (body and itemised gear) that the sizing chooses the spring
+ * for, and the load cases the carried loads make: with the passenger, with the luggage, with both.
+ */
 
-import type { Gear, WeighIn, WeighInTotals } from '../types/garage';
+import type { CarriedLoad, Gear, WeighIn, WeighInTotals } from '../types/garage';
+import type { LoadCaseRequest } from '../types/sizing';
 
 /** Sums of decimal kilograms carry float noise (0.1 + 0.2); a microgram is far below any scale. */
 function tidy(kg: number): number {
@@ -11,25 +15,40 @@ export function sumGear(gear: Gear): number {
   return tidy(Object.values(gear).reduce<number>((sum, kg) => sum + (kg ?? 0), 0));
 }
 
+export const LOAD_CASE_NAMES = {
+  passenger: 'With passenger',
+  luggage: 'With luggage',
+  both: 'With passenger and luggage',
+} as const;
+
 /**
- * The loads' rear share is weighted by mass: the rear wheel carries the sum of each load's mass
- * times its share, so one combined load with that share puts the same weight on each wheel.
+ * One load case for the loads given: their mass summed, and a rear share weighted by mass, so the
+ * rear wheel carries the sum of each load's mass times its share, as the loads themselves put it.
  */
+function combine(name: string, loads: readonly CarriedLoad[]): LoadCaseRequest {
+  const massKg = tidy(loads.reduce((sum, load) => sum + load.massKg, 0));
+  const rearShare = tidy(loads.reduce((sum, load) => sum + load.massKg * load.rearShare, 0) / massKg);
+  return { name, massKg, rearShare };
+}
+
+export function loadCasesOf(loads: readonly CarriedLoad[]): LoadCaseRequest[] {
+  const carried = loads.filter((load) => load.massKg > 0);
+  const passengers = carried.filter((load) => load.kind === 'passenger');
+  const luggage = carried.filter((load) => load.kind !== 'passenger');
+  const cases: LoadCaseRequest[] = [];
+  if (passengers.length > 0) cases.push(combine(LOAD_CASE_NAMES.passenger, passengers));
+  if (luggage.length > 0) cases.push(combine(LOAD_CASE_NAMES.luggage, luggage));
+  if (passengers.length > 0 && luggage.length > 0) cases.push(combine(LOAD_CASE_NAMES.both, carried));
+  return cases;
+}
+
 export function totalWeighIn(weighIn: WeighIn): WeighInTotals {
   const gearKg = sumGear(weighIn.gear);
   const luggageKg = tidy(weighIn.loads.reduce((sum, load) => sum + load.massKg, 0));
-  const luggageRearShare =
-    luggageKg > 0 ? tidy(weighIn.loads.reduce((sum, load) => sum + load.massKg * load.rearShare, 0) / luggageKg) : null;
   return {
     gearKg,
     luggageKg,
-    luggageRearShare,
-    rider: {
-      bodyKg: weighIn.bodyKg,
-      gearKg,
-      luggageKg,
-      rearShare: weighIn.rearShare,
-      ...(luggageRearShare === null ? {} : { luggageRearShare }),
-    },
+    rider: { bodyKg: weighIn.bodyKg, gearKg, rearShare: weighIn.rearShare },
+    loadCases: loadCasesOf(weighIn.loads),
   };
 }

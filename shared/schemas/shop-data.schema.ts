@@ -50,6 +50,8 @@ export const ENGINE_SETTING_RANGES: Readonly<Record<string, NumberRange>> = {
   'frictionSpreadMm.front': { min: 0, max: 100, aboveMin: true },
   'frictionSpreadMm.rear': { min: 0, max: 100, aboveMin: true },
   impliedRateMismatchPct: { min: 0, max: 100, aboveMin: true },
+  staticLoadMismatchPct: { min: 0, max: 100, aboveMin: true },
+  marginalRatePct: { min: 0, max: 100, aboveMin: true },
   minCaptivePreloadMm: { min: 0, max: 20 },
   coilBindMarginMm: { min: 0, max: 30 },
   'adjusterResolution.threaded': { min: 0, max: 5, aboveMin: true },

@@ -145,10 +145,20 @@ function springTypeSchema(endName: string) {
   });
 }
 
+/**
+ * Physical bounds per kind (from memory): the softest fork springs on small bikes run about 2 to
+ * 4 N/mm and the softest shock springs about 20 to 30 N/mm, so anything under these is a slip of
+ * the unit, not a spring that holds a motorcycle up.
+ */
+export const FORK_RATE_NMM: Bounds = [1, 50];
+export const SHOCK_RATE_NMM: Bounds = [10, 500];
+
 function commonEndFields(endName: string, rateBounds: Bounds) {
   return {
-    rateNmm: quantity(`${capitalise(endName)} spring rate`, rateBounds, ' N/mm', 'read it from the spring or its paperwork, in N/mm (1 kgf/mm is 9.81 N/mm)', {
+    rateNmm: quantity(`${capitalise(endName)} spring rate`, rateBounds, ' N/mm', 'read it from the spring or its paperwork, in N/mm (1 kgf/mm is 9.81 N/mm)'),
+    maxDeflectionMm: quantity('Coil-bind deflection', [0, 500], ' mm', "give how far the fitted spring compresses before its coils touch, or leave it out", {
       aboveMin: true,
+      optional: true,
     }),
     secondRateNmm: quantity('Second rate', [0, 500], ' N/mm', 'give the rate above the break point of a dual-rate spring, or leave it out', {
       aboveMin: true,
@@ -262,7 +272,7 @@ const frontSchema = object({
     .required('Sprung legs is missing: count the fork legs that hold a spring (1 or 2).')
     .oneOf([1, 2], 'Sprung legs must be 1 or 2: count the fork legs that hold a spring.'),
   rakeDeg: quantity('Rake', [0, 45], ' degrees', "give the fork's angle from vertical, from the manual"),
-  ...commonEndFields('fork', [0, 50]),
+  ...commonEndFields('fork', FORK_RATE_NMM),
 })
   .default(undefined)
   .nonNullable("The front end must give the fork's travel, spring and adjuster, or be left out.")
@@ -282,7 +292,7 @@ const rearSchema = object({
     .default(undefined)
     .nonNullable('The linkage curve must be a list of [wheel mm, shock mm] points, or left out for a constant leverage ratio.')
     .typeError('The linkage curve must be a list of [wheel mm, shock mm] points.'),
-  ...commonEndFields('shock', [0, 500]),
+  ...commonEndFields('shock', SHOCK_RATE_NMM),
 })
   .default(undefined)
   .nonNullable("The rear end must give the shock's travel, stroke, spring and adjuster, or be left out.")
@@ -378,14 +388,43 @@ const bikeSchema = object({
 const riderSchema = object({
   bodyKg: quantity('Rider body mass', [20, 300], ' kg', 'weigh the rider without gear'),
   gearKg: quantity('Gear mass', [0, 80], ' kg', 'weigh helmet, jacket, boots, protector and pack, or give 0'),
-  luggageKg: quantity('Luggage or passenger mass', [0, 300], ' kg', 'give what else rides along, or 0'),
   rearShare: quantity("Rider's rear share", [0, 1], '', "give the fraction of the rider's weight on the rear wheel, e.g. 0.65"),
-  luggageRearShare: quantity('Luggage rear share', [0, 1.5], '', 'give the fraction on the rear wheel: about 0.9 to 1 for a passenger, 1.1 to 1.3 for a top box', {
-    optional: true,
-  }),
 })
   .default(undefined)
-  .required('The rider is missing: give the rider, gear and luggage masses.');
+  .required('The rider is missing: give the rider and gear masses.');
+
+/** At most this many load cases: solo is always sized, and a handful of others is what a rider keeps. */
+const MAX_LOAD_CASES = 6;
+
+const loadCaseSchema = object({
+  name: string()
+    .transform((value: unknown) => (typeof value === 'string' ? value.trim() : value))
+    .typeError('A load case needs a name, as text.')
+    .required('A load case needs a name, such as "With passenger".')
+    .max(40, 'A load case name must be at most 40 characters.'),
+  massKg: quantity('Load case mass', [0, 300], ' kg', 'give the mass of the passenger or luggage it adds', { aboveMin: true }),
+  rearShare: quantity('Load case rear share', [0, 1.5], '', 'give the fraction on the rear wheel: about 0.9 to 1 for a passenger, 1.1 to 1.3 for a top box', {
+    optional: true,
+  }),
+});
+
+const loadCasesSchema = array()
+  .of(loadCaseSchema)
+  .default(undefined)
+  .nonNullable('Load cases must be a list, or left out.')
+  .typeError('Load cases must be a list of { name, massKg, rearShare }.')
+  .max(MAX_LOAD_CASES, `Give at most ${MAX_LOAD_CASES} load cases.`)
+  .test('distinct-names', function (cases) {
+    if (!Array.isArray(cases)) return true;
+    const seen = new Set<string>();
+    for (let i = 0; i < cases.length; i++) {
+      const name = typeof cases[i]?.name === 'string' ? cases[i].name.toLowerCase() : null;
+      if (name === null) continue;
+      if (seen.has(name)) return this.createError({ path: `${this.path}[${i}].name`, message: 'Each load case needs a name of its own.' });
+      seen.add(name);
+    }
+    return true;
+  });
 
 export const sizingRequestSchema = object({
   discipline: string()
@@ -396,6 +435,7 @@ export const sizingRequestSchema = object({
   rider: riderSchema,
   front: frontSchema,
   rear: rearSchema,
+  loadCases: loadCasesSchema,
   dampingRatio: quantity('Damping ratio', [0, 3], '', 'give the ride damping ratio to preview, about 0.2 to 0.5, or leave it out', {
     aboveMin: true,
     optional: true,

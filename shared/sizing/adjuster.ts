@@ -1,22 +1,11 @@
 /**
  * Preload in the adjuster's own units: turns of a threaded collar or cap, steps of a cam, or mm of
- * spacer; rounded to what a person can set.
+ * spacer; and the words a person sets them by. Turns are written in quarters where they fall on a
+ * quarter, as a collar or a cap is marked.
  */
 
 import type { Adjuster, AdjusterKind, AdjusterUnit, RangeMm } from '../types/sizing';
 import { formatNumber } from './format';
-
-export interface AdjusterPlan {
-  changeMm: number;
-  changeUnits: number;
-  roundedChangeUnits: number;
-  roundedChangeMm: number;
-  /** Absolute setting after the rounded change. */
-  position: number;
-  limitedByRange: boolean;
-  direction: 'add' | 'remove' | 'none';
-  unit: AdjusterUnit;
-}
 
 const UNIT_OF: Record<AdjusterKind, AdjusterUnit> = { threaded: 'turns', stepped: 'steps', spacer: 'mm' };
 
@@ -25,109 +14,66 @@ export function adjusterUnit(kind: AdjusterKind): AdjusterUnit {
 }
 
 /** Preloads the adjuster reaches, never below the minimum that keeps the spring captive. */
-export function computePreloadRange(
-  adjuster: Adjuster,
-  currentPreloadMm: number,
-  minCaptivePreloadMm: number,
-): RangeMm {
+export function computePreloadRange(adjuster: Adjuster, currentPreloadMm: number, minCaptivePreloadMm: number): RangeMm {
   const min = currentPreloadMm + ((adjuster.minPosition ?? 0) - adjuster.position) * adjuster.mmPerUnit;
   const max = currentPreloadMm + (adjuster.maxPosition - adjuster.position) * adjuster.mmPerUnit;
   return { min: Math.max(min, minCaptivePreloadMm), max };
 }
 
-/**
- * The settings a person can make for a needed preload: the nearest step of the resolution grid
- * (counted from the current setting), then the step on its other side. Both stay inside the
- * preload range: a stop can be set exactly, the captive minimum only from the first step above it.
- */
-export function planAdjustments(
-  adjuster: Adjuster,
-  currentPreloadMm: number,
-  neededPreloadMm: number,
-  resolution: number,
-  rangeMm: RangeMm,
-): AdjusterPlan[] {
-  const changeMm = neededPreloadMm - currentPreloadMm;
-  const changeUnits = changeMm / adjuster.mmPerUnit;
-  const steps = changeUnits / resolution;
-  // Halves round away from zero, so removing preload rounds as adding does.
-  const nearest = Math.sign(steps) * Math.round(Math.abs(steps));
-  const other = nearest > steps ? Math.floor(steps) : Math.ceil(steps);
-  const [low, high] = findSettableBounds(adjuster, currentPreloadMm, resolution, rangeMm);
-  const limitedByRange = neededPreloadMm < rangeMm.min - 1e-9 || neededPreloadMm > rangeMm.max + 1e-9;
-  const nearestPosition = clampToNano(adjuster.position + nearest * resolution, low, high);
-  const otherPosition = clampToNano(adjuster.position + other * resolution, low, high);
-  const plans = [planAt(adjuster, nearestPosition, changeMm, changeUnits, limitedByRange)];
-  if (otherPosition !== nearestPosition) plans.push(planAt(adjuster, otherPosition, changeMm, changeUnits, limitedByRange));
-  return plans;
+const QUARTERS = ['', '1/4', '1/2', '3/4'] as const;
+
+/** 1.5 → "1 1/2", 0.25 → "1/4", 2 → "2"; a count off the quarters (0.3 turns) in decimals. */
+export function formatTurnCount(turns: number): string {
+  const magnitude = Math.abs(turns);
+  const quarters = Math.round(magnitude * 4);
+  if (Math.abs(quarters - magnitude * 4) > 1e-6) return formatNumber(magnitude, 2);
+  const whole = Math.floor(quarters / 4);
+  const fraction = QUARTERS[quarters % 4];
+  if (whole === 0) return fraction || '0';
+  return fraction ? `${whole} ${fraction}` : String(whole);
 }
 
-function planAt(adjuster: Adjuster, position: number, changeMm: number, changeUnits: number, limitedByRange: boolean): AdjusterPlan {
-  // Float noise from the multiply would otherwise show as 1.2500000000000002 turns.
-  const roundedChangeUnits = roundToNano(position - adjuster.position);
-  return {
-    changeMm,
-    changeUnits,
-    roundedChangeUnits,
-    roundedChangeMm: roundedChangeUnits * adjuster.mmPerUnit,
-    position,
-    limitedByRange,
-    direction: roundedChangeUnits > 0 ? 'add' : roundedChangeUnits < 0 ? 'remove' : 'none',
-    unit: UNIT_OF[adjuster.kind],
-  };
+/** "1 turn", "3/4 turn", "1 1/2 turns", "3 steps". */
+function countOf(unit: 'turns' | 'steps', value: number): string {
+  if (unit === 'steps') {
+    const figure = formatNumber(Math.abs(value), 2);
+    return `${figure} ${figure === '1' ? 'step' : 'steps'}`;
+  }
+  const figure = formatTurnCount(value);
+  return `${figure} ${Math.abs(value) <= 1 + 1e-9 && figure !== '0' ? 'turn' : 'turns'}`;
 }
 
-function clampToNano(position: number, low: number, high: number): number {
-  return roundToNano(Math.min(high, Math.max(low, position)));
+/** An absolute setting, e.g. "6 1/4 turns", "3 steps" or "13.5 mm" of spacer. */
+export function describePosition(unit: AdjusterUnit, position: number): string {
+  if (unit === 'mm') return `${formatNumber(position, 2)} mm`;
+  return `${position < 0 ? '-' : ''}${countOf(unit, position)}`;
 }
 
-/** Lowest and highest positions that may be set, the range's lower edge taken up onto the grid unless it is the stop. */
-function findSettableBounds(
-  adjuster: Adjuster,
-  currentPreloadMm: number,
-  resolution: number,
-  rangeMm: RangeMm,
-): [number, number] {
-  const minPosition = adjuster.minPosition ?? 0;
-  const lowest = adjuster.position + (rangeMm.min - currentPreloadMm) / adjuster.mmPerUnit;
-  const low =
-    lowest <= minPosition + 1e-9
-      ? minPosition
-      : adjuster.position + Math.ceil((lowest - adjuster.position) / resolution - 1e-9) * resolution;
-  return [Math.min(low, adjuster.maxPosition), adjuster.maxPosition];
+export interface AdjustmentPhrase {
+  /** Signed, in adjuster units: positive adds preload. */
+  roundedChangeUnits: number;
+  position: number;
+  direction: 'add' | 'remove' | 'none';
 }
 
-function roundToNano(value: number): number {
-  return Math.round(value * 1e9) / 1e9;
-}
-
-const UNIT_WORDS: Record<'threaded' | 'stepped', [string, string]> = {
-  threaded: ['turn', 'turns'],
-  stepped: ['step', 'steps'],
-};
-
-/** "1 turn", "0.25 turns", "3 steps": a count of the adjuster's units as written. */
-function countOf(kind: 'threaded' | 'stepped', value: number): string {
-  const figure = formatNumber(value, 2);
-  const [one, many] = UNIT_WORDS[kind];
-  return `${figure} ${figure === '1' || figure === '-1' ? one : many}`;
-}
-
-/** An absolute setting, e.g. "6.25 turns" or "13.5 mm" of spacer. */
-export function describePosition(kind: AdjusterKind, position: number): string {
-  return kind === 'spacer' ? `${formatNumber(position, 2)} mm` : countOf(kind, position);
-}
-
-/** The change as a phrase, e.g. "add 1.25 turns of preload (to 6.25 turns)". */
-export function describeAdjustment(
-  kind: AdjusterKind,
-  plan: Pick<AdjusterPlan, 'roundedChangeUnits' | 'position' | 'direction'>,
-): string {
+/** The change as a phrase, e.g. "add 1 1/4 turns of preload (to 6 1/4 turns)". */
+export function describeAdjustment(unit: AdjusterUnit, plan: AdjustmentPhrase): string {
   if (plan.direction === 'none') return 'leave the preload as it is';
-  const to = describePosition(kind, plan.position);
-  if (kind === 'spacer') {
+  const to = describePosition(unit, plan.position);
+  if (unit === 'mm') {
     const amount = formatNumber(Math.abs(plan.roundedChangeUnits), 2);
     return `fit a spacer ${amount} mm ${plan.direction === 'add' ? 'longer' : 'shorter'} (${to})`;
   }
-  return `${plan.direction} ${countOf(kind, Math.abs(plan.roundedChangeUnits))} of preload (to ${to})`;
+  return `${plan.direction} ${countOf(unit, plan.roundedChangeUnits)} of preload (to ${to})`;
+}
+
+/** The change alone, short, as a card's heading: "add 1 1/2 turns", "remove 2 steps", "spacer 4 mm longer". */
+export function describeChange(unit: AdjusterUnit, changeUnits: number): string {
+  const amount = Math.abs(changeUnits);
+  if (unit === 'mm') {
+    if (amount < 1e-9) return 'keep the spacer';
+    return `spacer ${formatNumber(amount, 2)} mm ${changeUnits > 0 ? 'longer' : 'shorter'}`;
+  }
+  if (amount < 1e-9) return 'keep the setting';
+  return `${changeUnits > 0 ? 'add' : 'remove'} ${countOf(unit, changeUnits)}`;
 }

@@ -20,6 +20,8 @@ export interface EndModel {
   springsPerEnd: number;
   /** The linkage curve's slope falls somewhere. */
   regressive: boolean;
+  /** Sag moves with preload at a fixed ratio (a fork, or a shock with a constant leverage ratio): no curve. */
+  fixedRatio: boolean;
   /** Vertical wheel load (N) that holds the end at this sag. */
   loadAtSag(spring: SpringLaw, preloadMm: number, sagMm: number): number;
   /** 0 when topped out (the clamp acts), null when the load would bottom the end. */

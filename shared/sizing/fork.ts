@@ -14,6 +14,7 @@ class ForkModel implements EndModel {
   readonly springStrokeMm: number;
   readonly springsPerEnd: number;
   readonly regressive = false;
+  readonly fixedRatio = true;
   private readonly cos: number;
 
   constructor(front: FrontRequest) {

@@ -1,13 +1,10 @@
 /** Intake masses outside the shop's usual bounds: valid input, but worth a second look. */
 
-import type { BikeMasses, RiderMasses, SizingWarning, Window, WarningThresholds } from '../types/sizing';
+import type { SizingRequest, SizingWarning, Window, WarningThresholds } from '../types/sizing';
 import { warnImplausible } from './warnings';
 
-export function checkIntakePlausibility(
-  bike: BikeMasses,
-  rider: RiderMasses,
-  thresholds: WarningThresholds,
-): SizingWarning[] {
+export function checkIntakePlausibility(request: Pick<SizingRequest, 'bike' | 'rider' | 'loadCases'>, thresholds: WarningThresholds): SizingWarning[] {
+  const { bike, rider } = request;
   const bounds = thresholds.plausible;
   const warnings: SizingWarning[] = [];
   checkWithin(warnings, 'A bike wet mass', bike.massKg, ' kg', bounds.bikeKg);
@@ -16,8 +13,10 @@ export function checkIntakePlausibility(
   checkWithin(warnings, 'An unsprung rear mass', bike.unsprungRearKg, ' kg', bounds.unsprungKg);
   checkWithin(warnings, 'A rider body mass', rider.bodyKg, ' kg', bounds.riderBodyKg);
   checkWithin(warnings, 'A gear mass', rider.gearKg, ' kg', bounds.gearKg);
-  checkWithin(warnings, 'A luggage or passenger mass', rider.luggageKg, ' kg', bounds.luggageKg);
   checkWithin(warnings, "A rider's rear share", rider.rearShare, '', bounds.riderRearShare);
+  for (const loadCase of request.loadCases ?? []) {
+    checkWithin(warnings, `A load case (${loadCase.name})`, loadCase.massKg, ' kg', bounds.luggageKg);
+  }
   return warnings;
 }
 

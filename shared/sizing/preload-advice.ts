@@ -1,60 +1,53 @@
-/** The current spring's preload change, rounded to the adjuster, and the sags the rounded setting gives. */
+/** The fitted spring's preload change, rounded to the adjuster, and the sags the setting gives (section 5f). */
 
-import type { FrontRequest, LoadsN, PreloadAdvice, RangeMm, RearRequest, SizingWarning, WarningThresholds } from '../types/sizing';
-import { describeAdjustment, describePosition } from './adjuster';
+import type { AdjusterKind, PreloadAdvice, RangeMm, Verdict } from '../types/sizing';
+import { adjusterUnit, describeAdjustment } from './adjuster';
 import type { EndModel } from './end-model';
-import { chooseRoundedSetting } from './rounded-setting';
+import type { SettableSetting } from './settable-setting';
+import type { SpringAssessment } from './spring-assessment';
 import type { SpringLaw } from './spring-law';
-import type { SagWindows } from './targets';
-import { warnBottomedOut, warnRoundingOutsideWindow, warnToppedOut } from './warnings';
 
-/**
- * windows: where some preload keeps both sags inside (verdict 'keep'), the rounding must too when
- * either step of the adjuster does; null otherwise.
- */
-export function advisePreload(
-  model: EndModel,
-  spring: SpringLaw,
-  request: FrontRequest | RearRequest,
-  loads: LoadsN,
-  neededPreloadMm: number,
-  rangeMm: RangeMm,
-  windows: SagWindows | null,
-  thresholds: WarningThresholds,
-  warnings: SizingWarning[],
-): PreloadAdvice {
-  const adjuster = request.adjuster;
-  const setting = chooseRoundedSetting(
-    model,
-    spring,
-    loads,
-    { adjuster, currentPreloadMm: request.preloadMm, resolution: thresholds.adjusterResolution[adjuster.kind], rangeMm },
-    neededPreloadMm,
-    windows,
-  );
-  const { plan, riderSagMm: riderSagAfterMm, staticSagMm: staticSagAfterMm } = setting;
-  if (staticSagAfterMm === 0) warnings.push(warnToppedOut('Static sag at the new setting'));
-  if (riderSagAfterMm === null) warnings.push(warnBottomedOut('Rider sag at the new setting'));
-  if (windows && setting.insideWindows === false) {
-    warnings.push(
-      warnRoundingOutsideWindow(describePosition(adjuster.kind, plan.position), riderSagAfterMm, staticSagAfterMm, windows),
-    );
-  }
-  const phrase = describeAdjustment(adjuster.kind, plan);
+export interface PreloadAdviceInput {
+  model: EndModel;
+  spring: SpringLaw;
+  adjuster: { kind: AdjusterKind; mmPerUnit: number };
+  currentPreloadMm: number;
+  rangeMm: RangeMm;
+  assessment: SpringAssessment & { setting: SettableSetting };
+  verdict: Verdict;
+  /** The most the static load can be, when a topped-out static reading bounds it. */
+  staticMaxN: number | null;
+  /** The fitted spring's deflection at coil-bind, when known. */
+  maxDeflectionMm: number | null;
+}
+
+export function advisePreload(input: PreloadAdviceInput): PreloadAdvice {
+  const { model, spring, adjuster, currentPreloadMm, rangeMm, assessment, verdict } = input;
+  const setting = assessment.setting;
+  // A rate that suits aims where the windows say, even past the adjuster; a misfit aims at the compromise it is set to.
+  const neededMm = verdict === 'too-soft' || verdict === 'too-stiff' ? setting.targetMm : (assessment.windowsAimMm ?? setting.targetMm);
+  const changeMm = neededMm - currentPreloadMm;
+  const roundedChangeMm = setting.changeUnits * adjuster.mmPerUnit;
+  const direction = setting.changeUnits > 0 ? 'add' : setting.changeUnits < 0 ? 'remove' : 'none';
+  const phrase = describeAdjustment(adjusterUnit(adjuster.kind), { roundedChangeUnits: setting.changeUnits, position: setting.position, direction });
   return {
-    currentMm: request.preloadMm,
-    neededMm: neededPreloadMm,
-    changeMm: plan.changeMm,
-    changeUnits: plan.changeUnits,
-    unit: plan.unit,
-    direction: plan.direction,
-    roundedChangeUnits: plan.roundedChangeUnits,
-    roundedChangeMm: plan.roundedChangeMm,
-    position: plan.position,
-    limitedByRange: plan.limitedByRange,
+    currentMm: currentPreloadMm,
+    neededMm,
+    changeMm,
+    changeUnits: changeMm / adjuster.mmPerUnit,
+    unit: adjusterUnit(adjuster.kind),
+    direction,
+    roundedChangeUnits: setting.changeUnits,
+    roundedChangeMm,
+    position: setting.position,
+    limitedByRange: neededMm < rangeMm.min - 1e-9 || neededMm > rangeMm.max + 1e-9,
     rangeMm,
-    riderSagAfterMm,
-    staticSagAfterMm,
+    riderSagAfterMm: setting.riderSagMm,
+    staticSagAfterMm: setting.staticSagMm,
+    staticSagAfterMaxMm: input.staticMaxN === null ? null : model.sagAtLoad(spring, setting.preloadMm, input.staticMaxN),
+    fit: setting.fit,
+    interim: setting.fit !== 'both',
+    coilBindMarginMm: input.maxDeflectionMm === null ? null : input.maxDeflectionMm - (setting.preloadMm + model.springStrokeMm),
     instruction: phrase.charAt(0).toUpperCase() + phrase.slice(1) + '.',
   };
 }

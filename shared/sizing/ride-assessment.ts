@@ -1,21 +1,16 @@
 /**
- * The ride with the current spring against the recommended one: ride frequency (5g), the damping
- * ratio the same damper then gives (5h) and the preview's step figures (5i). Both springs are
- * rated where they would ride: each at the setting a person can make for it, and the rider sag
- * that setting gives.
+ * The ride now against the ride after the decision: ride frequency (5g), the damping ratio the
+ * same damper then gives (5h) and the preview's step figures (5i). "Now" is the bike as set now:
+ * the fitted spring at its present preload and rider sag. "After" is the spring and the setting
+ * the decision settles on; the preview's second curve is drawn only when that is a new spring.
  */
 
-import type { CandidateResult, EndResult, LoadsN } from '../types/sizing';
+import type { EndResult, LoadsN } from '../types/sizing';
 import type { EndModel } from './end-model';
 import { computeSprungMassKg } from './loads';
-import {
-  chooseReboundHint,
-  computeDampingRatioScale,
-  computeRideFrequencyHz,
-  RIDE_FREQUENCY_NOTE,
-} from './ride-frequency';
+import { computeDampingRatioScale, computeRideFrequencyHz, RIDE_FREQUENCY_NOTE } from './ride-frequency';
 import { choosePreviewDuration, describePreviewCurve, PREVIEW_NOTE } from './ride-preview';
-import { makeSpringLaw, type SpringLaw } from './spring-law';
+import type { SpringLaw } from './spring-law';
 
 export interface RideSetting {
   spring: SpringLaw;
@@ -26,26 +21,22 @@ export interface RideSetting {
 export function assessRide(
   model: EndModel,
   loads: LoadsN,
-  current: RideSetting,
-  pick: CandidateResult | null,
+  now: RideSetting | null,
+  after: RideSetting | null,
+  afterIsNewSpring: boolean,
   dampingRatio: number,
-  sameRatePct: number,
-): Pick<EndResult, 'rideFrequencyHz' | 'dampingRatioScale' | 'reboundHint' | 'preview'> {
+): Pick<EndResult, 'rideFrequencyHz' | 'dampingRatioScale' | 'preview'> {
   const massKg = computeSprungMassKg(loads);
-  const oldRate = model.wheelRateAt(current.spring, current.preloadMm, current.riderSagMm);
-  const newRate =
-    pick && pick.setPreloadMm !== null && pick.riderSagMm !== null
-      ? model.wheelRateAt(makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm), pick.setPreloadMm, pick.riderSagMm)
-      : null;
-  const currentHz = computeRideFrequencyHz(oldRate, massKg);
-  const recommendedHz = newRate === null ? null : computeRideFrequencyHz(newRate, massKg);
-  const scale = newRate === null ? null : computeDampingRatioScale(oldRate, newRate);
+  const nowRate = now ? model.wheelRateAt(now.spring, now.preloadMm, now.riderSagMm) : null;
+  const afterRate = after ? model.wheelRateAt(after.spring, after.preloadMm, after.riderSagMm) : null;
+  const currentHz = nowRate === null ? null : computeRideFrequencyHz(nowRate, massKg);
+  const afterHz = afterRate === null ? null : computeRideFrequencyHz(afterRate, massKg);
+  const scale = afterIsNewSpring && nowRate !== null && afterRate !== null ? computeDampingRatioScale(nowRate, afterRate) : null;
   const oldWn = currentHz === null ? null : 2 * Math.PI * currentHz;
-  const newWn = recommendedHz === null || scale === null ? null : 2 * Math.PI * recommendedHz;
+  const newWn = scale === null || afterHz === null ? null : 2 * Math.PI * afterHz;
   return {
-    rideFrequencyHz: { current: currentHz, recommended: recommendedHz, note: RIDE_FREQUENCY_NOTE },
+    rideFrequencyHz: { current: currentHz, after: afterHz, note: RIDE_FREQUENCY_NOTE },
     dampingRatioScale: scale,
-    reboundHint: scale === null || newRate === null ? null : chooseReboundHint(oldRate, newRate, sameRatePct),
     preview: {
       assumedDampingRatio: dampingRatio,
       old: oldWn === null ? null : describePreviewCurve(oldWn, dampingRatio),

@@ -17,15 +17,3 @@ export function computeDampingRatioScale(oldWheelRateNmm: number, newWheelRateNm
   if (!(oldWheelRateNmm > 0) || !(newWheelRateNmm > 0)) return null;
   return Math.sqrt(oldWheelRateNmm / newWheelRateNmm);
 }
-
-/** A stiffer spring lowers zeta, so start with more rebound damping; a softer one, less. */
-export function chooseReboundHint(
-  oldWheelRateNmm: number,
-  newWheelRateNmm: number,
-  sameWithinPct: number,
-): 'more' | 'less' | 'same' {
-  const change = (newWheelRateNmm / oldWheelRateNmm - 1) * 100;
-  if (change > sameWithinPct) return 'more';
-  if (change < -sameWithinPct) return 'less';
-  return 'same';
-}

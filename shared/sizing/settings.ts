@@ -24,6 +24,8 @@ export const SETTING_KEYS: readonly string[] = [
   'frictionSpreadMm.front',
   'frictionSpreadMm.rear',
   'impliedRateMismatchPct',
+  'staticLoadMismatchPct',
+  'marginalRatePct',
   'minCaptivePreloadMm',
   'coilBindMarginMm',
   'adjusterResolution.threaded',
@@ -46,6 +48,8 @@ export function buildWarningThresholds(settings: readonly EngineSettingValue[]):
   return {
     frictionSpreadMm: { front: read('frictionSpreadMm.front'), rear: read('frictionSpreadMm.rear') },
     impliedRateMismatchPct: read('impliedRateMismatchPct'),
+    staticLoadMismatchPct: read('staticLoadMismatchPct'),
+    marginalRatePct: read('marginalRatePct'),
     minCaptivePreloadMm: read('minCaptivePreloadMm'),
     coilBindMarginMm: read('coilBindMarginMm'),
     adjusterResolution: {

@@ -28,6 +28,7 @@ class ConstantRatioModel implements EndModel {
   readonly springStrokeMm: number;
   readonly springsPerEnd = 1;
   readonly regressive = false;
+  readonly fixedRatio = true;
   private readonly lr: number;
   private readonly gas: number;
 
@@ -82,6 +83,7 @@ function makeLinkageModel(rear: RearRequest): EndModel {
     springStrokeMm: shockAt(curve, travelMm),
     springsPerEnd: 1,
     regressive: isRegressive(curve),
+    fixedRatio: false,
     loadAtSag,
     sagAtLoad,
     preloadForSag(spring, loadN, sagMm) {

@@ -3,9 +3,10 @@
  * the server sizes many quotes and the client re-sizes on every keystroke.
  */
 
-import type { SizingContext, SizingRequest, SizingResult } from '../types/sizing';
+import type { EndKind, SizingContext, SizingRequest, SizingResult } from '../types/sizing';
 import { makeForkModel } from './fork';
-import { computeIntakeLoads } from './loads';
+import type { LoadCaseInput } from './load-cases';
+import { addedLoadN, computeIntakeLoads } from './loads';
 import { checkIntakePlausibility } from './plausibility';
 import { makeShockModel } from './shock';
 import { sizeEnd } from './size-end';
@@ -13,7 +14,7 @@ import { ENGINE_VERSION } from './version';
 
 export function sizeBike(request: SizingRequest, context: SizingContext): SizingResult {
   const thresholds = context.thresholds;
-  const sharedWarnings = checkIntakePlausibility(request.bike, request.rider, thresholds);
+  const sharedWarnings = checkIntakePlausibility(request, thresholds);
   const dampingRatio = request.dampingRatio ?? thresholds.dampingRatio;
   const result: SizingResult = {
     engineVersion: ENGINE_VERSION,
@@ -26,9 +27,10 @@ export function sizeBike(request: SizingRequest, context: SizingContext): Sizing
         end: 'front',
         model: makeForkModel(request.front),
         request: request.front,
-        intakeLoads: computeIntakeLoads(request.bike, request.rider, 'front', thresholds.luggageRearShare),
+        intakeLoads: computeIntakeLoads(request.bike, request.rider, 'front'),
         windowsPct: context.profile.front,
         springs: context.springs.front,
+        loadCases: loadCasesOn(request, 'front', thresholds.luggageRearShare),
         dampingRatio,
         sharedWarnings,
       },
@@ -41,9 +43,10 @@ export function sizeBike(request: SizingRequest, context: SizingContext): Sizing
         end: 'rear',
         model: makeShockModel(request.rear),
         request: request.rear,
-        intakeLoads: computeIntakeLoads(request.bike, request.rider, 'rear', thresholds.luggageRearShare),
+        intakeLoads: computeIntakeLoads(request.bike, request.rider, 'rear'),
         windowsPct: context.profile.rear,
         springs: context.springs.rear,
+        loadCases: loadCasesOn(request, 'rear', thresholds.luggageRearShare),
         dampingRatio,
         sharedWarnings,
       },
@@ -51,4 +54,12 @@ export function sizeBike(request: SizingRequest, context: SizingContext): Sizing
     );
   }
   return result;
+}
+
+function loadCasesOn(request: SizingRequest, end: EndKind, defaultRearShare: number): LoadCaseInput[] {
+  return (request.loadCases ?? []).map((c) => ({
+    name: c.name,
+    massKg: c.massKg,
+    addedN: addedLoadN(c.massKg, c.rearShare ?? defaultRearShare, end),
+  }));
 }

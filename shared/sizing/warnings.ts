@@ -41,8 +41,8 @@ export function warnNoRiderSag(): SizingWarning {
 export function warnStaticReadingToppedOut(end: EndKind): SizingWarning {
   return warning(
     'topped-out',
-    `The static reading shows no sag: preload${end === 'rear' ? ' and gas force hold' : ' holds'} the ${END_NAME[end]} topped out, so the reading gives only a bound.`,
-    'Figures use the intake weights. To calibrate, back off preload until the bike settles under its own weight and measure again.',
+    `The static reading shows no sag: preload${end === 'rear' ? ' and gas force hold' : ' holds'} the ${END_NAME[end]} topped out, so that reading gives only a bound.`,
+    'The preload change comes from the rider reading, which is still good; static sag after it is given as a bound. Measure the static sag again after the change.',
   );
 }
 
@@ -70,11 +70,34 @@ export function warnBottomedOut(which: string): SizingWarning {
   );
 }
 
-export function warnSmallStaticSag(sagMm: number): SizingWarning {
+export function warnSmallStaticSag(sagMm: number, measured: boolean): SizingWarning {
   return note(
     'small-static-sag',
-    `Predicted static sag is only ${formatNumber(sagMm, 1)} mm.`,
-    'A top-out spring lets the end move before the load reaches the preload force, so so small a figure is unreliable: measure it.',
+    `${measured ? 'Measured' : 'Predicted'} static sag is only ${formatNumber(sagMm, 1)} mm.`,
+    measured
+      ? 'A top-out spring lets the end move before the load reaches the preload force, so so small a static sag says little about the spring: rely on the rider reading, and measure again after the change.'
+      : 'A top-out spring lets the end move before the load reaches the preload force, so so small a figure is unreliable: measure it.',
+  );
+}
+
+export function warnStaticLoadMismatch(end: EndKind, calibratedN: number, weighedN: number, limitPct: number): SizingWarning {
+  const pct = ((calibratedN - weighedN) / weighedN) * 100;
+  const causes =
+    end === 'front'
+      ? "the stated preload, the fork's air gap (the air pushes too), a top-out spring, the bike's front share and the unsprung front mass"
+      : "the stated preload, the shock's gas force, a top-out spring, the bike's front share, the unsprung rear mass and the leverage ratio";
+  return warning(
+    'static-load-mismatch',
+    `The readings put ${formatNumber(calibratedN, 0)} N of the bike on the ${END_NAME[end]}, against ${formatNumber(weighedN, 0)} N from the weights (${pct > 0 ? '+' : ''}${formatNumber(pct, 0)} %, more than ${formatNumber(limitPct, 0)} %).`,
+    `Check ${causes}.`,
+  );
+}
+
+export function warnFittedCoilBind(marginMm: number, requiredMm: number): SizingWarning {
+  return warning(
+    'coil-bind',
+    `The fitted spring is left ${formatNumber(marginMm, 1)} mm short of coil-bind at full travel at its present preload; ${formatNumber(requiredMm, 1)} mm is to be kept clear.`,
+    'Take preload off, or fit a longer spring of the same rate: a spring that coil-binds stops the suspension hard and can break.',
   );
 }
 
@@ -97,7 +120,7 @@ export function warnCoilBind(count: number, marginMm: number): SizingWarning {
   return warning(
     'coil-bind',
     `${count} catalogue spring${count === 1 ? '' : 's'} would come within ${formatNumber(marginMm, 1)} mm of coil-bind at full travel with the preload needed.`,
-    'They are listed as not feasible; a longer spring of the same family or less preload would clear.',
+    'They are judged at the most preload that keeps them clear; a longer spring of the same family would reach the aim.',
   );
 }
 
@@ -106,7 +129,7 @@ export function warnAdjusterRange(neededMm: number | null, range: RangeMm): Sizi
   return warning(
     'adjuster-range',
     `${needed} is outside what the adjuster gives (${formatNumber(range.min, 1)} to ${formatNumber(range.max, 1)} mm, keeping the spring captive).`,
-    'The setting shown stops at the adjuster\'s end; a spring of another rate or length, or a spacer, would reach the target.',
+    'The setting shown stops at the adjuster\'s end; a preload spacer, or a spring of another rate or length, would reach the target.',
   );
 }
 
@@ -129,7 +152,7 @@ export function warnRoundingOutsideWindow(
   return warning(
     'rounding-outside-window',
     `No setting the adjuster can make keeps both sags inside their windows: the nearest, ${setting}, gives ${sag('rider', riderSagMm, windows.riderSagMm)} and ${sag('static', staticSagMm, windows.staticSagMm)}.`,
-    'One step of this adjuster moves the sags further than the windows allow; a finer adjuster, a spacer, or a spring nearer the ideal rate would fit.',
+    'One step of this adjuster moves the sags further than the windows allow; a thin spacer under the spring, a finer adjuster, or a spring of another rate would fit.',
   );
 }
 

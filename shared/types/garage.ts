@@ -6,7 +6,7 @@
 
 import type { ForceUnit, LengthUnit, MassUnit, RateUnit } from '../units';
 import type { Bike } from './bike';
-import type { EndKind, RangeMm, Readings, RiderMasses, SizingMode, SizingRequest, SizingResult, TargetProfile, Verdict } from './sizing';
+import type { DecisionKind, EndKind, LoadCaseRequest, RangeMm, Readings, RiderMasses, SizingMode, SizingRequest, SizingResult, TargetProfile, Verdict } from './sizing';
 
 export const GEAR_ITEMS = ['helmet', 'jacket', 'trousers', 'boots', 'gloves', 'backProtector', 'pack', 'other'] as const;
 
@@ -43,11 +43,12 @@ export interface WeighIn {
 
 export interface WeighInTotals {
   gearKg: number;
+  /** Everything carried, passengers included. */
   luggageKg: number;
-  /** Mass-weighted over the loads; null without any. */
-  luggageRearShare: number | null;
-  /** The `rider` part of a sizing request. */
+  /** The `rider` part of a sizing request: the solo rider in gear. */
   rider: RiderMasses;
+  /** The `loadCases` of a sizing request: each adds preload on the spring the solo rider chose. */
+  loadCases: LoadCaseRequest[];
 }
 
 /** GET and PUT /api/weigh-in. */
@@ -143,6 +144,8 @@ export interface EndSummary {
   targetRiderSagPct: RangeMm;
   targetStaticSagPct: RangeMm;
   verdict: Verdict | null;
+  /** What the pass advised: keep, marginal, change, check first; null for passes made before decisions. */
+  decision: DecisionKind | null;
   installedRateNmm: number;
   preloadMm: number;
   /** The best spring overall, when the engine found one. */

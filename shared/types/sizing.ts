@@ -37,6 +37,8 @@ export interface EndTarget {
 
 interface EndCommonRequest {
   rateNmm: number;
+  /** The fitted spring's deflection at coil-bind, when known; else a catalogue spring of the same fit and rate stands in. */
+  maxDeflectionMm?: number;
   /** Dual-rate spring: the rate above breakMm of spring compression. */
   secondRateNmm?: number | null;
   breakMm?: number | null;
@@ -75,14 +77,19 @@ export interface BikeMasses {
   unsprungRearKg: number;
 }
 
+/** The solo rider: what chooses the spring. */
 export interface RiderMasses {
   bodyKg: number;
   gearKg: number;
-  /** Luggage or passenger. */
-  luggageKg: number;
   rearShare: number;
-  /** Above 1 for a top box behind the rear axle. */
-  luggageRearShare?: number;
+}
+
+/** A passenger or luggage carried now and then: it adds preload on the spring the solo sizing chose. */
+export interface LoadCaseRequest {
+  name: string;
+  massKg: number;
+  /** Share of its weight on the rear wheel; above 1 for a top box behind the axle. */
+  rearShare?: number;
 }
 
 export interface SizingRequest {
@@ -91,6 +98,7 @@ export interface SizingRequest {
   rider: RiderMasses;
   front?: FrontRequest;
   rear?: RearRequest;
+  loadCases?: LoadCaseRequest[];
   /** Assumed ride damping ratio for the preview. */
   dampingRatio?: number;
 }
@@ -128,6 +136,10 @@ export interface WarningThresholds {
   /** Full spread between pushed and lifted readings above which friction is suspect. */
   frictionSpreadMm: { front: number; rear: number };
   impliedRateMismatchPct: number;
+  /** Calibrated against weighed static load, in %, before a warning. */
+  staticLoadMismatchPct: number;
+  /** A fitted rate this far off the ideal, in %, makes a keep marginal. */
+  marginalRatePct: number;
   /** Smallest preload that keeps a spring captive. */
   minCaptivePreloadMm: number;
   /** Spring deflection to keep clear of coil-bind at full travel. */
@@ -138,7 +150,7 @@ export interface WarningThresholds {
   smallStaticSagMm: number;
   /** Rates closer than this give the rebound hint 'same'. */
   sameRatePct: number;
-  /** Assumed when the request leaves it out. */
+  /** Assumed for a load case that leaves it out. */
   luggageRearShare: number;
   dampingRatio: number;
   /** Intake figures outside these are flagged as implausible. */
@@ -163,6 +175,7 @@ export type WarningCode =
   | 'friction-band-large'
   | 'reading-order'
   | 'implied-rate-mismatch'
+  | 'static-load-mismatch'
   | 'topped-out'
   | 'bottomed-out'
   | 'small-static-sag'
@@ -188,6 +201,7 @@ export interface SizingWarning {
 
 export type SizingMode = 'weights' | 'readings';
 
+/** The fitted spring at settings a person can make: it keeps both windows, or its rate, or the adjuster, does not let it. */
 export type Verdict = 'keep' | 'too-soft' | 'too-stiff' | 'preload-out-of-range';
 
 export type AdjusterUnit = 'turns' | 'steps' | 'mm';
@@ -196,6 +210,13 @@ export interface RangeMm {
   min: number;
   max: number;
 }
+
+/**
+ * Where a setting leaves the two sags, best first: both inside their windows; rider sag inside
+ * with static sag deep (a stiff spring's compromise); static sag inside (a soft spring's); neither,
+ * but off the stops; at a stop (topped out without the rider, or bottomed with him).
+ */
+export type SettingFit = 'both' | 'rider' | 'static' | 'off' | 'at-stop';
 
 export interface TargetUsed {
   discipline: string;
@@ -208,7 +229,7 @@ export interface TargetUsed {
   /** Middles of the windows (S*, T*). */
   riderMiddleMm: number;
   staticMiddleMm: number;
-  /** Rider sag the current spring's preload is aimed at: the middle, or the nearest that keeps both sags in and the adjuster reaches. */
+  /** Rider sag the fitted spring's preload is aimed at: the middle, or the nearest that keeps both sags in and the adjuster reaches. */
   aimRiderSagMm: number;
 }
 
@@ -218,14 +239,17 @@ export interface LoadsN {
 }
 
 export interface EndLoadsResult extends LoadsN {
-  source: 'calibrated' | 'intake';
+  /** 'rider-reading': the static reading was topped out, so only the total under the rider is calibrated. */
+  source: 'calibrated' | 'rider-reading' | 'intake';
   calibrated: LoadsN | null;
   intake: LoadsN;
+  /** With a topped-out static reading: the most the static load can be, since it did not move the end off its top. */
+  staticMaxN: number | null;
 }
 
 export interface PreloadAdvice {
   currentMm: number;
-  /** Unrounded preload that puts rider sag on the aim. */
+  /** Unrounded preload aimed at: rider sag on the aim (5c), or the compromise an interim setting aims at. */
   neededMm: number;
   changeMm: number;
   changeUnits: number;
@@ -235,11 +259,19 @@ export interface PreloadAdvice {
   roundedChangeMm: number;
   /** Absolute adjuster setting after the rounded change. */
   position: number;
-  /** The needed preload lies outside rangeMm (the adjuster's stops, the captive minimum); the setting stops at its edge. */
+  /** The aim lies outside rangeMm (the adjuster's stops, the captive minimum, coil-bind); the setting stops at its edge. */
   limitedByRange: boolean;
   rangeMm: RangeMm;
   riderSagAfterMm: number | null;
   staticSagAfterMm: number | null;
+  /** With a topped-out static reading, the most static sag can be at the new setting; null otherwise. */
+  staticSagAfterMaxMm: number | null;
+  /** Where the setting leaves the sags. */
+  fit: SettingFit;
+  /** Until a better spring is fitted: the fitted spring cannot keep both windows at any setting. */
+  interim: boolean;
+  /** Left before coil-bind at full travel with this setting; null when the spring's coil-bind length is not known. */
+  coilBindMarginMm: number | null;
   instruction: string;
 }
 
@@ -249,24 +281,29 @@ export interface CandidateResult {
   rateNmm: number;
   secondRateNmm: number | null;
   breakMm: number | null;
-  /** Unrounded preload that holds rider sag at S*; null where none does (a linkage whose x' falls). */
+  /** Unrounded preload aimed at for it; null where none holds rider sag on the aim (a linkage whose x' falls). */
   preloadMm: number | null;
-  /** Rounded change from the current setting, in adjuster units. */
+  /** Rounded change from the current setting, in adjuster units; null when no setting can be made for it. */
   preloadUnits: number | null;
   unit: AdjusterUnit;
   position: number | null;
-  /** Preload at that rounded setting; the sags below are the ones it gives. */
+  /** Preload at that setting; the sags below are the ones it gives. */
   setPreloadMm: number | null;
   staticSagMm: number | null;
   riderSagMm: number | null;
   staticSagPct: number | null;
   riderSagPct: number | null;
+  /** Where its best setting leaves the sags; null with no setting at all. */
+  fit: SettingFit | null;
   /** Static sag at the setting is 0: the preload holds the end topped out without the rider. */
   toppedOut: boolean;
   coilBindMarginMm: number | null;
   available: number;
   inStock: boolean;
+  /** Offered as a fit: both sags inside their windows at a setting the adjuster can make. */
   feasible: boolean;
+  /** How far its sags land from the middles, in half-windows (0 on both middles); ranks the fits. */
+  missScore: number | null;
   reason: string | null;
 }
 
@@ -299,6 +336,134 @@ export interface FromWeightsFigures {
   idealRateNmm: number | null;
 }
 
+/** A spring as the decision names it: a dual-rate one by its label (6.5/9 N/mm), never by its rate at sag. */
+export interface SpringName {
+  rateNmm: number;
+  secondRateNmm: number | null;
+}
+
+/** A catalogue spring the decision offers. */
+export interface SpringOffer extends SpringName {
+  sku: string;
+  family: string;
+  inStock: boolean;
+  available: number;
+}
+
+/** A setting a person makes, with the sags it gives. */
+export interface SettingStep {
+  unit: AdjusterUnit;
+  /** Signed change from the current setting, in adjuster units; positive adds preload. */
+  changeUnits: number;
+  position: number;
+  riderSagMm: number | null;
+  staticSagMm: number | null;
+  /** With a topped-out static reading: the most static sag can be. */
+  staticSagMaxMm: number | null;
+}
+
+export type DecisionStep =
+  | { kind: 'preload'; interim: boolean; spring: SpringName; setting: SettingStep }
+  | { kind: 'fit-spring'; spring: SpringOffer; setting: SettingStep }
+  | { kind: 'order-spring'; rateNmm: number | null; family: string }
+  | { kind: 'spacer'; lengthMm: number; setting: SettingStep }
+  | { kind: 'consider-spring'; better: SpringOffer | null; inStock: SpringOffer | null; orderRateNmm: number | null }
+  | { kind: 'remeasure'; end: EndKind; items: RemeasureItem[] }
+  | { kind: 'measure-static'; staticSagMaxMm: number | null };
+
+export type RemeasureItem = 'friction' | 'weights' | 'geometry' | 'spring-label' | 'preload';
+
+export type DecisionReason =
+  | { code: 'inside-windows'; riderSagMm: number; staticSagMm: number; rider: RangeMm; static: RangeMm }
+  | { code: 'band-crosses-limit'; differenceMm: number; bandMm: number; limitMm: number | null; side: 'soft' | 'stiff' }
+  | { code: 'rate-off-ideal'; installed: SpringName; effectiveRateNmm: number; idealRateNmm: number; offPct: number }
+  | { code: 'near-window-edge'; which: 'rider' | 'static'; sagMm: number; bandMm: number; window: RangeMm }
+  | { code: 'too-soft' | 'too-stiff'; installed: SpringName; idealRateNmm: number | null }
+  | { code: 'adjuster-limit'; cause: 'range' | 'steps' | 'coil-bind'; neededMm: number; rangeMm: RangeMm }
+  | { code: 'rate-mismatch'; impliedRateNmm: number; bandNmm: number | null; statedRateNmm: number }
+  | { code: 'static-topped-out'; riderSagMm: number }
+  | { code: 'shelf-short'; spring: SpringOffer; riderSagMm: number | null; staticSagMm: number | null; rider: RangeMm; static: RangeMm }
+  | { code: 'none-in-catalogue'; family: string }
+  | { code: 'weights-only' }
+  | { code: 'targets-invalid' };
+
+/**
+ * keep: the fitted spring with a setting that keeps both sags in their windows. marginal: the same,
+ * but the readings' band or the rate's distance from the ideal leaves it on the edge. change: the
+ * fitted spring cannot be set inside both windows. check: the readings and the stated spring
+ * disagree, so nothing is to be acted on before re-measuring. none: the targets cannot be aimed at.
+ */
+export type DecisionKind = 'keep' | 'marginal' | 'change' | 'check' | 'none';
+
+/** How far the decision can be trusted: from readings, marginal, from the weights alone, bounded by a topped-out reading, or in doubt. */
+export type Certainty = 'measured' | 'marginal' | 'estimate' | 'bounded' | 'unsure';
+
+export interface DampingHint {
+  direction: 'more' | 'less' | 'same';
+  /** The new spring's rate; the hint holds only if it is fitted. */
+  spring: SpringName;
+  /** Offered, not advised: the spring is the better option of a marginal keep. */
+  conditional: boolean;
+}
+
+/** The decision's sentences, written in one set of units. */
+export interface DecisionText {
+  headline: string;
+  steps: string[];
+  reasons: string[];
+  certainty: string;
+  /** Only with a spring change: where to start the rebound damping. */
+  damping: string | null;
+}
+
+export interface EndDecision {
+  kind: DecisionKind;
+  certainty: Certainty;
+  /** The fitted spring, as labelled. */
+  installed: SpringName;
+  /** What to do, in order; each step can be set on the bike. */
+  steps: DecisionStep[];
+  /** Why, for whoever opens it. */
+  reasons: DecisionReason[];
+  /** The spring to fit (change) or the better option (marginal): what a quote is built on. */
+  pick: SpringOffer | null;
+  dampingHint: DampingHint | null;
+  /** The sentences in SI units, for readers of the API; screens write them in the user's units from the fields above. */
+  text: DecisionText;
+  /** Made by an engine before the decision was worked out as steps: only its headline, as it was written, is known. */
+  legacy?: true;
+}
+
+/** Rider sag minus static sag, with the readings' band and the limits the fitted spring must keep it within (5c). */
+export interface SagDifference {
+  mm: number;
+  /** Plus or minus: the two readings' friction bands added, as bounds add (Taylor, ch. 2 and 3). */
+  bandMm: number | null;
+  /** Above this the spring is too soft; null where the limits move with preload (a linkage or a dual-rate spring). */
+  softLimitMm: number | null;
+  /** Below this the spring is too stiff. */
+  stiffLimitMm: number | null;
+}
+
+export interface LoadCaseResult {
+  name: string;
+  massKg: number;
+  /** Added wheel load on this end. */
+  addedLoadN: number;
+  /** The spring the case is set on: the one the decision settles on. */
+  spring: SpringName;
+  unit: AdjusterUnit;
+  /** Change from the solo setting, in adjuster units; positive adds preload. */
+  changeUnits: number;
+  position: number;
+  preloadMm: number;
+  riderSagMm: number | null;
+  /** Rider sag stays inside its window with the load, at a setting the adjuster can make. */
+  carries: boolean;
+  /** What stops the setting short: the adjuster's range, coil-bind, or a rider sag past its window at the limit. */
+  limit: 'range' | 'coil-bind' | null;
+}
+
 export interface EndResult {
   end: EndKind;
   mode: SizingMode;
@@ -309,26 +474,36 @@ export interface EndResult {
   riderSagPct: number | null;
   /** Plus or minus half the spread of each pushed/lifted pair. */
   frictionBandMm: { static: number | null; rider: number | null } | null;
+  sagDifference: SagDifference | null;
   target: TargetUsed;
   loads: EndLoadsResult;
-  /** The installed spring's rate over the sag range (its label rate unless dual-rate). */
+  /** The fitted spring as labelled. */
+  installedSpring: SpringName;
+  /** The fitted spring's rate over the sag range (its label rate unless dual-rate). */
   installedRateNmm: number;
   impliedRateNmm: number | null;
   /** Plus or minus, carried from the friction band. */
   impliedRateBandNmm: number | null;
   idealRateNmm: number | null;
+  /** Plus or minus, carried from the friction band. */
+  idealRateBandNmm: number | null;
   fromWeights: FromWeightsFigures;
   verdict: Verdict | null;
+  /** The decision's headline in SI units. */
   verdictText: string;
+  decision: EndDecision;
   preload: PreloadAdvice | null;
-  rideFrequencyHz: { current: number | null; recommended: number | null; note: string };
+  /** Now: the bike as set now. After: the spring and setting the decision settles on. */
+  rideFrequencyHz: { current: number | null; after: number | null; note: string };
   dampingRatioScale: number | null;
-  reboundHint: 'more' | 'less' | 'same' | null;
   recommendation: {
     inStock: CandidateResult | null;
     best: CandidateResult | null;
+    /** The nearest spring on the shelf, fit or not: what the decision names when none on the shelf fits. */
+    closestInStock: CandidateResult | null;
     candidates: CandidateResult[];
   };
+  loadCases: LoadCaseResult[];
   preview: RidePreview;
   warnings: SizingWarning[];
 }

@@ -11,6 +11,7 @@ import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import { formatNumber } from '../../shared/sizing/format';
+import type { BikeSpec } from '../../shared/types/bike';
 import type { SizingRecord } from '../../shared/types/garage';
 import type { EndResult, SizingResult } from '../../shared/types/sizing';
 import { apiFor } from './api-helpers';
@@ -74,22 +75,41 @@ async function engineAnswer(recordId: number): Promise<SizingResult> {
 const mm = (value: number | null) => (value === null ? '–' : `${formatNumber(value, 1)} mm`);
 const pct = (value: number | null) => `${formatNumber(value ?? 0, 1)} %`;
 
-async function expectFigures(page: Page, result: EndResult) {
-  const text = (name: string) => byTestId(page, `result-${result.end}-${name}`).innerText();
+/**
+ * What the screen shows for an end against the engine's own answer: the decision (headline, steps,
+ * pick and damping hint), both windows beside the sags, and the figures. The decision must also
+ * agree with itself and with the bike: a preload card only for a preload step, a damping hint only
+ * with a spring to fit, and the advised setting inside the adjuster's range.
+ */
+async function expectFigures(page: Page, result: EndResult, bike: BikeSpec) {
+  const testId = (name: string) => byTestId(page, `result-${result.end}-${name}`);
+  const text = (name: string) => testId(name).innerText();
+  const { decision } = result;
+  expect(await text('decision-headline')).toBe(decision.text.headline);
+  for (const [i, step] of decision.text.steps.entries()) expect(await text(`decision-step-${i}`)).toBe(step);
+  expect(await text('static-window')).toBe(`window ${mm(result.target.staticSagMm.min)} to ${mm(result.target.staticSagMm.max)}`);
+  expect(await text('rider-window')).toBe(`window ${mm(result.target.riderSagMm.min)} to ${mm(result.target.riderSagMm.max)}`);
   expect(await text('static-sag')).toBe(mm(result.staticSagMm));
   expect(await text('rider-sag')).toBe(mm(result.riderSagMm));
   expect(await text('static-sag-pct')).toBe(pct(result.staticSagPct));
   expect(await text('rider-sag-pct')).toBe(pct(result.riderSagPct));
   expect(await text('travel')).toBe(mm(result.travelMm));
-  expect(await text('verdict')).toBe(result.verdictText);
-  expect(await text('installed-rate')).toBe(`${formatNumber(result.installedRateNmm, 1)} N/mm`);
-  if (result.preload) {
+  expect(await text('installed-spring')).toBe(`${formatNumber(result.installedSpring.rateNmm, 1)} N/mm`);
+  const preloadStep = decision.steps.find((s) => s.kind === 'preload');
+  expect(await testId('preload-card').count()).toBe(preloadStep ? 1 : 0);
+  if (preloadStep && result.preload) {
     expect(await text('rider-sag-after')).toBe(mm(result.preload.riderSagAfterMm));
-    expect(await text('static-sag-after')).toBe(mm(result.preload.staticSagAfterMm));
+    const adjuster = bike[result.end]!.adjuster;
+    expect(result.preload.position).toBeGreaterThanOrEqual(adjuster.minPosition ?? 0);
+    expect(result.preload.position).toBeLessThanOrEqual(adjuster.maxPosition);
   }
+  expect(await testId('spring-pick').count()).toBe(decision.pick ? 1 : 0);
+  if (decision.pick) expect(await text('spring-pick')).toBe(`${formatNumber(decision.pick.rateNmm, 1)} N/mm`);
+  expect(await testId('decision-damping').count()).toBe(decision.text.damping ? 1 : 0);
+  if (decision.kind === 'keep') expect(decision.pick).toBeNull();
   const hz = (value: number | null) => (value === null ? '–' : `${formatNumber(value, 2)} Hz`);
   expect(await text('freq-current')).toBe(hz(result.rideFrequencyHz.current));
-  expect(await text('freq-recommended')).toBe(hz(result.rideFrequencyHz.recommended));
+  expect(await text('freq-after')).toBe(hz(result.rideFrequencyHz.after));
 }
 
 test('a rider measures a bike from a shop model, resumes, adjusts and re-measures', async () => {
@@ -157,7 +177,7 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   await page.getByRole('button', { name: 'Work it out' }).click();
   await page.waitForURL((url) => /^\/rider\/results\/\d+$/.test(url.pathname));
   const recordId = Number(page.url().split('/').pop());
-  await byTestId(page, 'result-front-verdict').waitFor();
+  await byTestId(page, 'result-front-decision-headline').waitFor();
   await screenshot(page, 'rider-result-phone');
   // The ride preview: road step by default; the damping ratio is the result's until changed.
   const damping = byTestId(page, 'result-rear-preview-damping');
@@ -170,8 +190,10 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   await screenshot(page, 'rider-result-actions-phone');
 
   const answer = await engineAnswer(recordId);
-  await expectFigures(page, answer.front!);
-  await expectFigures(page, answer.rear!);
+  const { record: saved } = await call<{ record: SizingRecord }>('GET', `/sizing-records/${recordId}`, await signInApi(rider.email));
+  const bikeSpec = (await call<{ bike: BikeSpec }>('GET', `/bikes/${saved.bikeId}`, await signInApi(rider.email))).bike;
+  await expectFigures(page, answer.front!, bikeSpec);
+  await expectFigures(page, answer.rear!, bikeSpec);
   // The hand-worked figure again, on the result itself.
   expect(await byTestId(page, 'result-front-static-sag').innerText()).toBe('24 mm');
 
@@ -219,7 +241,7 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   await signInThroughForm(page, rider.email, DEMO_PASSWORD);
   await waitForPath(page, '/rider');
   await page.goto(`${live.server.url}/rider/results/${recordId}`);
-  await byTestId(page, 'result-front-verdict').waitFor();
+  await byTestId(page, 'result-front-decision-headline').waitFor();
   const front = (await byTestId(page, 'result-front').boundingBox())!;
   const rear = (await byTestId(page, 'result-rear').boundingBox())!;
   expect(rear.x).toBeGreaterThan(front.x + front.width - 1);
@@ -238,7 +260,9 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   await page.goto(`${live.server.url}/rider/results/${recordId}`);
   await byTestId(page, 'result-front-static-sag').filter({ hasText: 'in' }).waitFor();
   expect(await byTestId(page, 'result-front-static-sag').innerText()).toBe('0.94 in');
-  expect(await byTestId(page, 'result-rear-installed-rate').innerText()).toBe(`${formatNumber(answer.rear!.installedRateNmm / 0.1751268, 0)} lbf/in`);
+  // 1 lbf/in = 0.1751268 N/mm (NIST SP 811): the fitted spring and the headline both in the rider's units.
+  expect(await byTestId(page, 'result-rear-installed-spring').innerText()).toBe(`${formatNumber(answer.rear!.installedSpring.rateNmm / 0.1751268, 0)} lbf/in`);
+  expect(await byTestId(page, 'result-rear-decision-headline').innerText()).toContain(`${formatNumber(answer.rear!.installedSpring.rateNmm / 0.1751268, 0)} lbf/in`);
   await screenshot(page, 'rider-result-imperial-wide');
   await page.goto(`${live.server.url}/rider`);
   await page.getByRole('radio', { name: 'mm · kg' }).click();

@@ -4,17 +4,26 @@ import { ThemedText } from '@/components/ui/themed-text';
 import { Quantity } from '@/components/units/quantity';
 import { formatNumber } from '@shared/sizing/format';
 import type { EndSummary } from '@shared/types/garage';
-import type { EndKind, Verdict } from '@shared/types/sizing';
+import type { DecisionKind, EndKind, Verdict } from '@shared/types/sizing';
 import { useTheme } from '@/theme';
 
-export const VERDICT_LABELS: Record<Verdict, string> = {
+const DECISION_WORDS: Record<DecisionKind, string> = {
+  keep: 'keep the spring',
+  marginal: 'spring works, marginal',
+  change: 'change the spring',
+  check: 'check before acting',
+  none: 'no advice',
+};
+
+/** Passes made before decisions carry only the verdict on the spring. */
+const VERDICT_WORDS: Record<Verdict, string> = {
   keep: 'spring suits',
   'too-soft': 'spring too soft',
   'too-stiff': 'spring too stiff',
   'preload-out-of-range': 'preload out of range',
 };
 
-/** "Rear: rider sag 34.0 mm (30 %), spring suits". */
+/** "Rear: rider sag 34.0 mm (30 %), keep the spring". */
 export function EndSummaryLine({ end, summary, testID }: { end: EndKind; summary: EndSummary; testID?: string }) {
   const { spacing } = useTheme();
   return (
@@ -22,7 +31,11 @@ export function EndSummaryLine({ end, summary, testID }: { end: EndKind; summary
       <ThemedText type="label">{end === 'front' ? 'Front' : 'Rear'}: rider sag</ThemedText>
       <Quantity value={summary.riderSagMm} kind="length" />
       {summary.riderSagPct !== null && <ThemedText type="figure">({formatNumber(summary.riderSagPct, 0)} %)</ThemedText>}
-      {summary.verdict && <ThemedText color="textMuted">, {VERDICT_LABELS[summary.verdict]}</ThemedText>}
+      {summary.decision ? (
+        <ThemedText color="textMuted">, {DECISION_WORDS[summary.decision]}</ThemedText>
+      ) : (
+        summary.verdict && <ThemedText color="textMuted">, {VERDICT_WORDS[summary.verdict]}</ThemedText>
+      )}
     </View>
   );
 }

@@ -9,12 +9,12 @@ import { ThemedText } from '@/components/ui/themed-text';
 import { useStartDraft } from '@/hooks/use-draft';
 import { requestQuote } from '@/hooks/use-quote-request';
 import { useSetupChange } from '@/hooks/use-setup-log';
+import { describeChange } from '@shared/sizing/adjuster';
 import type { SizingRecord } from '@shared/types/garage';
 import type { EndKind } from '@shared/types/sizing';
 import { useTheme } from '@/theme';
 
 import { preloadUnitsOf } from './end-result-card';
-import { formatPreloadChange } from './preload-text';
 
 /** What the rider does next: record the preload change, measure again, ask the shop for a quote, print the sheet. */
 export function ResultActions({ record }: { record: SizingRecord }) {
@@ -26,9 +26,10 @@ export function ResultActions({ record }: { record: SizingRecord }) {
   const [done, setDone] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [quoteAsked, setQuoteAsked] = useState<string | null>(null);
+  // Only a preload the decision tells the rider to set: never one under "check before acting".
   const changed = (['front', 'rear'] as const).filter((end) => {
     const result = record.result[end];
-    return result && preloadUnitsOf(result) !== 0;
+    return result && !result.decision.legacy && result.decision.steps.some((s) => s.kind === 'preload') && preloadUnitsOf(result) !== 0;
   });
 
   async function run(action: () => Promise<void>) {
@@ -50,7 +51,7 @@ export function ResultActions({ record }: { record: SizingRecord }) {
       for (const end of changed) {
         const preload = record.result[end]!.preload!;
         input[end] = { preloadPosition: preload.position };
-        parts.push(`${end}: ${formatPreloadChange(preloadUnitsOf(record.result[end]!), preload.unit)}`);
+        parts.push(`${end}: ${describeChange(preload.unit, preloadUnitsOf(record.result[end]!))}`);
       }
       await recordChange({ ...input, note: `Preload as advised (${parts.join('; ')})` });
       setDone('The change is in the setup log. Measure again to see what it gave.');

@@ -19,7 +19,8 @@ describe('weigh-in', () => {
     const saved = (await rider.put('/weigh-in', body).expect(200)).body;
     // weigh-in.fields.ts (from memory): upright 0.70, top box 1.2. Gear 1.5 + 2.5 + 1.5 + 2.5 = 8 kg.
     expect(saved.weighIn).toEqual({ ...WEIGH_IN, position: 'upright', rearShare: 0.7, loads: [{ kind: 'top-box', massKg: 8, rearShare: 1.2 }] });
-    expect(saved.totals.rider).toEqual({ bodyKg: 82, gearKg: 8, luggageKg: 8, rearShare: 0.7, luggageRearShare: 1.2 });
+    expect(saved.totals.rider).toEqual({ bodyKg: 82, gearKg: 8, rearShare: 0.7 });
+    expect(saved.totals.loadCases).toEqual([{ name: 'With luggage', massKg: 8, rearShare: 1.2 }]);
     expect(saved.weighedAt).toEqual(expect.any(String));
     expect((await rider.get('/weigh-in').expect(200)).body).toEqual(saved);
     await rider.put('/weigh-in', WEIGH_IN).expect(200);

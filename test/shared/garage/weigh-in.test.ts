@@ -16,24 +16,29 @@ const weighIn: WeighIn = {
     { kind: 'passenger', massKg: 70, rearShare: 0.95 },
     { kind: 'top-box', massKg: 10, rearShare: 1.2 },
   ],
-  discipline: 'two-up',
+  discipline: 'touring',
   position: 'upright',
   rearShare: 0.7,
 };
 
-test('gear and loads add up, the loads rear share weighted by mass', () => {
+test('gear adds up to the solo rider; the loads make load cases, each rear share weighted by mass', () => {
   const totals = totalWeighIn(weighIn);
-  // 1.5 + 2.5 + 2.5 + 0.3 = 6.8 kg; 70 + 10 = 80 kg; (70 x 0.95 + 10 x 1.2) / 80 = 78.5 / 80 = 0.98125.
+  // 1.5 + 2.5 + 2.5 + 0.3 = 6.8 kg; 70 + 10 = 80 kg carried.
   expect(totals.gearKg).toBe(6.8);
   expect(totals.luggageKg).toBe(80);
-  expect(totals.luggageRearShare).toBeCloseTo(0.98125, 12);
-  expect(totals.rider).toEqual({ bodyKg: 82, gearKg: 6.8, luggageKg: 80, rearShare: 0.7, luggageRearShare: totals.luggageRearShare });
+  expect(totals.rider).toEqual({ bodyKg: 82, gearKg: 6.8, rearShare: 0.7 });
+  // Passenger alone, the top box alone, and both: (70 x 0.95 + 10 x 1.2) / 80 = 78.5 / 80 = 0.98125.
+  expect(totals.loadCases).toEqual([
+    { name: 'With passenger', massKg: 70, rearShare: 0.95 },
+    { name: 'With luggage', massKg: 10, rearShare: 1.2 },
+    { name: 'With passenger and luggage', massKg: 80, rearShare: 0.98125 },
+  ]);
 });
 
-test('without loads the engine default share applies (none is sent)', () => {
+test('without loads there are no load cases, and none is sent', () => {
   const totals = totalWeighIn({ ...weighIn, loads: [] });
-  expect(totals.luggageRearShare).toBeNull();
-  expect(totals.rider).not.toHaveProperty('luggageRearShare');
+  expect(totals.loadCases).toEqual([]);
+  expect(buildSizingRequest({ bike: DEMO_BIKE_MODELS[0], weighIn: { ...weighIn, loads: [] }, ends: ['rear'] })).not.toHaveProperty('loadCases');
 });
 
 test('every demo model and a weigh-in make a request the sizing schema accepts, one to one', () => {

@@ -5,7 +5,8 @@ import { roadFront, roadRear, roadRequest } from '../sizing/fixtures';
 /** A request using every part the schema knows: readings (one paired), targets, a linkage, a dual rate. */
 function fullRequest(): SizingRequest {
   return roadRequest({
-    rider: { bodyKg: 80, gearKg: 8, luggageKg: 15, rearShare: 0.65, luggageRearShare: 1.1 },
+    rider: { bodyKg: 80, gearKg: 8, rearShare: 0.65 },
+    loadCases: [{ name: 'With luggage', massKg: 15, rearShare: 1.1 }],
     front: roadFront({
       secondRateNmm: 12,
       breakMm: 60,
@@ -57,10 +58,12 @@ describe('sizing request schema', () => {
     ['text that is not a number', (r) => (r.rider.bodyKg = 'eighty'), 'rider.bodyKg', /must be a number/],
     ['a value out of physical range', (r) => (r.rider.bodyKg = 400), 'rider.bodyKg', /between 20 and 300 kg/],
     ['Infinity', (r) => (r.front.travelMm = Number.POSITIVE_INFINITY), 'front.travelMm', /between 30 and 350 mm/],
-    ['a zero rate', (r) => (r.rear.rateNmm = 0), 'rear.rateNmm', /above 0/],
+    ['a zero rate', (r) => (r.rear.rateNmm = 0), 'rear.rateNmm', /between 10 and 500 N\/mm/],
+    ['a fork rate no spring has (0.001 N/mm)', (r) => (r.front.rateNmm = 0.001), 'front.rateNmm', /between 1 and 50 N\/mm/],
     ['a front share outside 0..1', (r) => (r.bike.frontShare = 1.2), 'bike.frontShare', /between 0 and 1/],
     ['a rider share outside 0..1', (r) => (r.rider.rearShare = -0.1), 'rider.rearShare', /between 0 and 1/],
-    ['a luggage share beyond a top box', (r) => (r.rider.luggageRearShare = 1.8), 'rider.luggageRearShare', /top box/],
+    ['a luggage share beyond a top box', (r) => (r.loadCases[0].rearShare = 1.8), 'loadCases[0].rearShare', /top box/],
+    ['a load case without a name', (r) => (r.loadCases[0].name = ' '), 'loadCases[0].name', /needs a name/],
     ['unsprung mass above the wheel weight', (r) => (r.bike.unsprungRearKg = 120), 'bike.unsprungRearKg', /re-check it and the front share/],
     ['three sprung legs', (r) => (r.front.springCount = 3), 'front.springCount', /1 or 2/],
     ['a rake beyond 45 degrees', (r) => (r.front.rakeDeg = 60), 'front.rakeDeg', /between 0 and 45 degrees/],

@@ -67,7 +67,7 @@ export function roadRequest(overrides: Partial<SizingRequest> = {}): SizingReque
   return {
     discipline: 'road',
     bike: { massKg: 220, frontShare: 0.5, unsprungFrontKg: 20, unsprungRearKg: 25 },
-    rider: { bodyKg: 80, gearKg: 8, luggageKg: 0, rearShare: 0.65 },
+    rider: { bodyKg: 80, gearKg: 8, rearShare: 0.65 },
     front: roadFront(),
     rear: roadRear(),
     ...overrides,
@@ -227,9 +227,9 @@ export function arbitraryRequest(): fc.Arbitrary<SizingRequest> {
           unsprungFrontKg: r.unsprungShare * r.massKg * r.frontShare,
           unsprungRearKg: r.unsprungShare * r.massKg * (1 - r.frontShare),
         },
-        rider: { bodyKg: r.bodyKg, gearKg: r.gearKg, luggageKg: r.luggageKg, rearShare: r.rearShare },
+        rider: { bodyKg: r.bodyKg, gearKg: r.gearKg, rearShare: r.rearShare },
       };
-      if (r.luggageRearShare !== undefined) request.rider.luggageRearShare = r.luggageRearShare;
+      if (r.luggageKg > 0) request.loadCases = [{ name: 'With passenger', massKg: r.luggageKg, ...(r.luggageRearShare !== undefined ? { rearShare: r.luggageRearShare } : {}) }];
       if (r.front) request.front = r.front;
       if (r.rear) request.rear = r.rear;
       if (r.dampingRatio !== undefined) request.dampingRatio = r.dampingRatio;
@@ -294,7 +294,7 @@ export function arbitraryEdgeRequest(): fc.Arbitrary<SizingRequest> {
         travelMm: fc.constant(travelMm),
         springCount: fc.constantFrom(1 as const, 2 as const),
         rakeDeg: edge(0, 45),
-        rateNmm: edge(0.001, 50),
+        rateNmm: edge(1, 50),
         preloadMm: edge(0, 100),
         family: fc.constant('F'),
         adjuster: arbitraryEdgeAdjuster(),
@@ -312,7 +312,7 @@ export function arbitraryEdgeRequest(): fc.Arbitrary<SizingRequest> {
         shockStrokeMm: fc.constant(stroke),
         gasForceN: edge(0, 2000),
         linkage: arbitraryLinkage(travel, stroke),
-        rateNmm: edge(0.001, 500),
+        rateNmm: edge(10, 500),
         preloadMm: edge(0, 100),
         family: fc.constant('S'),
         adjuster: arbitraryEdgeAdjuster(),
@@ -346,9 +346,9 @@ export function arbitraryEdgeRequest(): fc.Arbitrary<SizingRequest> {
           unsprungFrontKg: Math.min(150, r.unsprungFront * r.massKg * r.frontShare),
           unsprungRearKg: Math.min(150, r.unsprungRear * r.massKg * (1 - r.frontShare)),
         },
-        rider: { bodyKg: r.bodyKg, gearKg: r.gearKg, luggageKg: r.luggageKg, rearShare: r.rearShare },
+        rider: { bodyKg: r.bodyKg, gearKg: r.gearKg, rearShare: r.rearShare },
       };
-      if (r.luggageRearShare !== undefined) request.rider.luggageRearShare = r.luggageRearShare;
+      if (r.luggageKg > 0) request.loadCases = [{ name: 'With passenger', massKg: r.luggageKg, ...(r.luggageRearShare !== undefined ? { rearShare: r.luggageRearShare } : {}) }];
       if (r.front) request.front = r.front;
       if (r.rear) request.rear = r.rear;
       if (r.dampingRatio !== undefined) request.dampingRatio = r.dampingRatio;

@@ -170,11 +170,14 @@ describe('sizeBike: from readings', () => {
     expect(bottomed.impliedRateNmm).toBeNull();
   });
 
-  it('says the end is topped out when the static reading shows no sag, and falls back to the weights', () => {
+  it('says the end is topped out when the static reading shows no sag, and calibrates the total from the rider reading', () => {
     const topped = run(roadRequest({ front: roadFront({ readings: { extendedMm: 600, staticMm: 600, riderMm: 585 } }) })).front!;
     expect(codes(topped)).toContain('topped-out');
-    expect(topped.loads.source).toBe('intake');
+    expect(topped.loads.source).toBe('rider-reading');
     expect(topped.impliedRateNmm).toBeNull();
+    // The total: n*k0*(S_R + p0)/cos = 18*(15 + 8)/cos25; the static part is at most n*k0*p0/cos = 18*8/cos25.
+    expect(topped.loads.staticN + topped.loads.riderN).toBeCloseTo((18 * 23) / cos25, 9);
+    expect(topped.loads.staticMaxN).toBeCloseTo((18 * 8) / cos25, 9);
   });
 });
 
@@ -185,7 +188,11 @@ describe('sizeBike: verdicts, candidates and the ride', () => {
     expect(front.preload?.limitedByRange).toBe(true);
     expect(front.preload?.position).toBe(8);
     expect(codes(front)).toContain('adjuster-range');
-    expect(front.verdictText).toMatch(/outside the adjuster/);
+    expect(front.decision.kind).toBe('change');
+    // Needs 23 mm of preload; 8 turns give 11 mm: a 12 mm spacer under the spring at 8 turns reaches it.
+    expect(front.decision.text.headline).toBe(
+      "Fit a preload spacer 12 mm long under the spring and set the adjuster to 8 turns: the 9 N/mm spring suits, but it needs 23 mm of preload, outside the adjuster's 3 mm to 11 mm.",
+    );
   });
 
   it('never advises a preload below the captive minimum (2 mm, common practice)', () => {
@@ -218,56 +225,66 @@ describe('sizeBike: verdicts, candidates and the ride', () => {
     expect(note?.message).toMatch(/middle of its window \(38.1 mm\) needs 13.8 mm of preload, but the adjuster stops at 13 mm: .* 40.1 mm of rider sag instead/);
   });
 
-  it('rates the current spring for the ride at the preload the adjuster can give', () => {
-    // The middle needs 17.2 mm of preload; the adjuster gives at most 8 + 1.5 = 9.5 mm. On a linkage
-    // the wheel rate depends on where the end rides, so the figure is taken there (section 5g).
+  it('rates the ride now at the bike as set now, and after at the setting advised (linkage)', () => {
+    // On a linkage the wheel rate depends on where the end rides (section 5g), so "now" is taken at the
+    // present preload and rider sag, and "after" at the advised setting: here the two differ.
     const linkage: LinkagePoint[] = [
       [0, 0],
       [40, 14],
       [80, 31],
       [125, 50],
     ];
-    const rearRequest = roadRear({ linkage, adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 5, maxPosition: 6 } });
+    const rearRequest = roadRear({ linkage, adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 5, maxPosition: 12 } });
     const rear = run(roadRequest({ front: undefined, rear: rearRequest })).rear!;
-    expect(rear.verdict).toBe('preload-out-of-range');
+    expect(rear.decision.kind).toMatch(/keep|marginal/);
     const massKg = (rear.loads.staticN + rear.loads.riderN) / g;
     const hz = (wheelRateNmm: number) => Math.sqrt((wheelRateNmm * 1000) / massKg) / (2 * Math.PI);
     const model = makeShockModel(rearRequest);
-    const set = model.wheelRateAt(makeSpringLaw(120), 9.5, rear.preload?.riderSagAfterMm as number);
-    const unreachable = model.wheelRateAt(makeSpringLaw(120), rear.preload?.neededMm as number, rear.target.aimRiderSagMm);
-    expect(rear.rideFrequencyHz.current).toBeCloseTo(hz(set), 9);
-    expect(Math.abs(hz(set) - hz(unreachable))).toBeGreaterThan(0.1);
+    const nowRate = model.wheelRateAt(makeSpringLaw(120), 8, rear.riderSagMm as number);
+    const afterRate = model.wheelRateAt(makeSpringLaw(120), 8 + rear.preload!.roundedChangeMm, rear.preload?.riderSagAfterMm as number);
+    expect(rear.rideFrequencyHz.current).toBeCloseTo(hz(nowRate), 9);
+    expect(rear.rideFrequencyHz.after).toBeCloseTo(hz(afterRate), 9);
+    expect(Math.abs(hz(nowRate) - hz(afterRate))).toBeGreaterThan(0.01);
+    // The same spring stays: no second preview curve and no damping hint.
+    expect(rear.preview.new).toBeNull();
+    expect(rear.decision.dampingHint).toBeNull();
   });
 
-  it('calls a spring too soft or too stiff and names the ideal rate', () => {
+  it('calls a spring too soft or too stiff, names the ideal rate, and fits a catalogue spring that suits', () => {
     const soft = run(roadRequest({ rear: roadRear({ rateNmm: 70 }) })).rear!;
     expect(soft.verdict).toBe('too-soft');
-    expect(soft.verdictText).toMatch(/too soft.*about [\d.]+ N\/mm would\.$/);
+    expect(soft.decision.kind).toBe('change');
+    expect(soft.decision.text.reasons[0]).toMatch(/with the 70 N\/mm spring: .*about [\d.]+ N\/mm would\.$/);
+    expect(soft.decision.pick?.sku).toBe(soft.recommendation.inStock?.sku);
     const stiff = run(roadRequest({ rear: roadRear({ rateNmm: 250 }) })).rear!;
     expect(stiff.verdict).toBe('too-stiff');
+    expect(stiff.decision.text.headline).toMatch(/the 250 N\/mm spring is too stiff\.$/);
   });
 
-  it('offers the best spring in stock and the best overall, with the ride figures for the in-stock one', () => {
-    // Rear ideal is about 127 N/mm; put the two nearest out of stock.
+  it('offers the best spring in stock and the best overall, with the ride figures for the one it fits', () => {
+    // A 70 N/mm spring is too soft; the rear ideal is about 127 N/mm. Put the two nearest out of stock.
     const springs = {
       front: context.springs.front,
       rear: [shockSpring('S120', 120, 1, 1), shockSpring('S130', 130, 0), shockSpring('S140', 140, 3), shockSpring('S100', 100, 3)],
     };
-    const rear = run(roadRequest(), makeContext({ springs })).rear!;
+    const rear = run(roadRequest({ rear: roadRear({ rateNmm: 70 }) }), makeContext({ springs })).rear!;
     const best = rear.recommendation.best!;
     const inStock = rear.recommendation.inStock!;
     expect(['S120', 'S130']).toContain(best.sku);
     expect(inStock.inStock).toBe(true);
     expect(['S140', 'S100']).toContain(inStock.sku);
-    // f = sqrt(k/LR^2 * 1000 / m)/(2 pi) for the in-stock spring, m = (W_S + W_R)/g.
+    expect(rear.decision.pick?.sku).toBe(inStock.sku);
+    // f = sqrt(k/LR^2 * 1000 / m)/(2 pi), m = (W_S + W_R)/g: now on the fitted 70, after on the in-stock pick.
     const m = (rear.loads.staticN + rear.loads.riderN) / g;
-    expect(rear.rideFrequencyHz.recommended).toBeCloseTo(Math.sqrt(((inStock.rateNmm / 6.25) * 1000) / m) / (2 * Math.PI), 9);
-    expect(rear.rideFrequencyHz.current).toBeCloseTo(Math.sqrt(((120 / 6.25) * 1000) / m) / (2 * Math.PI), 9);
-    expect(rear.dampingRatioScale).toBeCloseTo(Math.sqrt(120 / inStock.rateNmm), 9);
-    expect(rear.reboundHint).toBe(inStock.rateNmm > 120 ? 'more' : 'less');
+    expect(rear.rideFrequencyHz.after).toBeCloseTo(Math.sqrt(((inStock.rateNmm / 6.25) * 1000) / m) / (2 * Math.PI), 9);
+    expect(rear.rideFrequencyHz.current).toBeCloseTo(Math.sqrt(((70 / 6.25) * 1000) / m) / (2 * Math.PI), 9);
+    expect(rear.dampingRatioScale).toBeCloseTo(Math.sqrt(70 / inStock.rateNmm), 9);
+    // Stiffer with the same damper: zeta falls by sqrt(k_old/k_new), so start with more rebound (section 5h).
+    expect(rear.decision.dampingHint).toEqual({ direction: 'more', spring: { rateNmm: inStock.rateNmm, secondRateNmm: null }, conditional: false });
+    expect(rear.decision.text.damping).toMatch(/^With the 1[04]0 N\/mm spring, start with more rebound damping/);
     expect(rear.preview.old?.zeta).toBe(0.3); // seeded default ride damping ratio (from memory)
     expect(rear.preview.new?.zeta).toBeCloseTo(0.3 * (rear.dampingRatioScale as number), 12);
-    expect(rear.preview.new?.wnRadS).toBeCloseTo(2 * Math.PI * (rear.rideFrequencyHz.recommended as number), 12);
+    expect(rear.preview.new?.wnRadS).toBeCloseTo(2 * Math.PI * (rear.rideFrequencyHz.after as number), 12);
   });
 
   it('uses the damping ratio the request gives for the preview', () => {
@@ -282,8 +299,7 @@ describe('sizeBike: verdicts, candidates and the ride', () => {
     const result = run(roadRequest(), makeContext({ springs }));
     expect(codes(result.front)).toEqual(expect.arrayContaining(['coil-bind', 'no-candidate']));
     expect(codes(result.rear)).toContain('no-candidate');
-    expect(result.rear?.recommendation).toEqual({ inStock: null, best: null, candidates: [] });
-    expect(result.rear?.rideFrequencyHz.recommended).toBeNull();
+    expect(result.rear?.recommendation).toEqual({ inStock: null, best: null, closestInStock: null, candidates: [] });
     expect(result.rear?.preview.new).toBeNull();
   });
 
@@ -298,7 +314,7 @@ describe('sizeBike: verdicts, candidates and the ride', () => {
     ];
     const result = run(
       roadRequest({
-        rider: { bodyKg: 190, gearKg: 8, luggageKg: 0, rearShare: 0.65 },
+        rider: { bodyKg: 190, gearKg: 8, rearShare: 0.65 },
         front: roadFront({ secondRateNmm: 12, breakMm: 60 }),
         rear: roadRear({ linkage: falling }),
       }),
@@ -308,8 +324,8 @@ describe('sizeBike: verdicts, candidates and the ride', () => {
   });
 
   it('gives null and a warning where a figure cannot be computed: no rider load on the front', () => {
-    // Rider all on the rear and a top box (share 1.3) lifting the front: W_RF = 20*(1 - 1.3)*g < 0.
-    const front = run(roadRequest({ rider: { bodyKg: 80, gearKg: 8, luggageKg: 20, rearShare: 1, luggageRearShare: 1.3 } })).front!;
+    // Rider all on the rear: W_RF = 88*(1 - 1)*g = 0. A top box (share 1.3) lifting the front is a load case on top.
+    const front = run(roadRequest({ rider: { bodyKg: 80, gearKg: 8, rearShare: 1 }, loadCases: [{ name: 'With luggage', massKg: 20, rearShare: 1.3 }] })).front!;
     expect(front.idealRateNmm).toBeNull();
     expect(codes(front)).toContain('weights-implausible');
     expect(collectNumbers(front).filter(([, v]) => !Number.isFinite(v))).toEqual([]);

@@ -1,8 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 import { Platform, View } from 'react-native';
 
-import { formatPreloadChange } from '@/components/result/preload-text';
-import { preloadUnitsOf } from '@/components/result/end-result-card';
+import { useDecisionText } from '@/components/result/decision-view';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
@@ -10,8 +9,10 @@ import { SAFETY_CAUTIONS } from '@/components/ui/safety-notice';
 import { Screen } from '@/components/ui/screen';
 import { ThemedText } from '@/components/ui/themed-text';
 import { Quantity } from '@/components/units/quantity';
+import { useQuantityFormat } from '@/components/units/quantity-format';
 import { useBike } from '@/hooks/use-bikes';
 import { useSizingRecord } from '@/hooks/use-sizing-records';
+import { describeLoadCase, nameSpring } from '@shared/sizing/decision-text';
 import type { EndResult } from '@shared/types/sizing';
 import { useTheme } from '@/theme';
 
@@ -24,36 +25,33 @@ function Line({ label, children }: { label: string; children: React.ReactNode })
   );
 }
 
+/** One end on paper: the decision's headline and steps, as on the result screen, and the sags with their windows. */
 function EndSheet({ result }: { result: EndResult }) {
-  const spring = result.recommendation.inStock ?? result.recommendation.best;
+  const text = useDecisionText(result);
+  const format = useQuantityFormat();
+  const id = `sheet-${result.end}`;
   return (
-    <View style={{ gap: 2 }}>
+    <View style={{ gap: 2 }} testID={id}>
       <ThemedText type="heading">{result.end === 'front' ? 'Front' : 'Rear'}</ThemedText>
-      <ThemedText>{result.verdictText}</ThemedText>
-      <Line label="Static sag">
+      <ThemedText type="bodyStrong" testID={`${id}-headline`}>
+        {text.headline}
+      </ThemedText>
+      {text.steps.map((step, i) => (
+        <ThemedText key={step}>
+          {i + 1}. {step}
+        </ThemedText>
+      ))}
+      <Line label={`Static sag (window ${format.length(result.target.staticSagMm.min)} to ${format.length(result.target.staticSagMm.max)})`}>
         <Quantity value={result.staticSagMm} kind="length" />
       </Line>
-      <Line label="Rider sag">
+      <Line label={`Rider sag (window ${format.length(result.target.riderSagMm.min)} to ${format.length(result.target.riderSagMm.max)})`}>
         <Quantity value={result.riderSagMm} kind="length" />
       </Line>
-      {result.preload && (
-        <Line label="Preload">
-          <ThemedText type="bodyStrong">{formatPreloadChange(preloadUnitsOf(result), result.preload.unit)}</ThemedText>
-        </Line>
-      )}
-      {result.preload && (
-        <Line label="Rider sag after">
-          <Quantity value={result.preload.riderSagAfterMm} kind="length" />
-        </Line>
-      )}
       <Line label="Spring fitted">
-        <Quantity value={result.installedRateNmm} kind="rate" />
+        <ThemedText type="figure">{nameSpring(result.installedSpring, format)}</ThemedText>
       </Line>
-      {spring && (
-        <Line label={`Recommended (${spring.sku})`}>
-          <Quantity value={spring.rateNmm} kind="rate" />
-        </Line>
-      )}
+      {result.decision.kind !== 'check' &&
+        result.loadCases.map((loadCase) => <ThemedText key={loadCase.name}>{describeLoadCase(loadCase, format)}</ThemedText>)}
     </View>
   );
 }
@@ -83,7 +81,7 @@ export default function SetupSheetScreen() {
     <Screen>
       <ThemedText type="title">Setup sheet</ThemedText>
       <ThemedText>
-        {bike.data?.bike.nickname ?? 'Bike'} · {record.profileLabel} · {new Date(record.createdAt).toLocaleDateString()}
+        {bike.data?.bike.nickname ?? 'Bike'} · {record.profileLabel} · {new Date(record.createdAt).toLocaleDateString()} · engine {record.engineVersion}
       </ThemedText>
       {Platform.OS === 'web' && <Button label="Print" onPress={() => window.print()} testID="print-sheet" />}
       <View style={{ gap: spacing.lg }} testID="setup-sheet">

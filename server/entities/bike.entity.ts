@@ -1,5 +1,6 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { FrontSpec, RearSpec } from '../../shared/types/bike';
+import type { ActiveLoadCase } from '../../shared/types/load-case';
 import type { BikeMasses } from '../../shared/types/sizing';
 
 /**
@@ -31,6 +32,10 @@ export class Bike {
 
   @Column({ type: 'simple-json', nullable: true })
   rear!: RearSpec | null;
+
+  /** The load case set now, with the solo positions to go back to; null while it rides solo. */
+  @Column({ type: 'simple-json', nullable: true })
+  loadCase!: ActiveLoadCase | null;
 
   @Column({ type: 'datetime' })
   createdAt!: Date;

@@ -3,6 +3,7 @@ import { authRoutes } from './auth.router';
 import { bikeModelRoutes } from './bike-models.router';
 import { bikeRoutes } from './bikes.router';
 import { draftRoutes } from './drafts.router';
+import { loadCaseRoutes } from './load-cases.router';
 import { profileRoutes } from './profile.router';
 import { setupLogRoutes } from './setup-log.router';
 import { shopDataRoutes } from './shop-data.router';
@@ -23,5 +24,5 @@ import { shopSettingsRoutes } from './shop-settings.router';
 
 /** The whole API, in one table. */
 export function apiRoutes(ctx: AppContext): RouteSpec[] {
-  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...shopDataRoutes(ctx), ...shopSettingsRoutes(ctx), ...customerRoutes(ctx), ...quoteRoutes(ctx), ...customerQuoteRoutes(ctx), ...paymentRoutes(ctx)];
+  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...loadCaseRoutes(ctx), ...shopDataRoutes(ctx), ...shopSettingsRoutes(ctx), ...customerRoutes(ctx), ...quoteRoutes(ctx), ...customerQuoteRoutes(ctx), ...paymentRoutes(ctx)];
 }

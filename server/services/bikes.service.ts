@@ -145,6 +145,7 @@ export function toBikeView(bike: Bike, modelName: ReadonlyMap<number, string>): 
     ownerId: bike.ownerId,
     nickname: bike.nickname,
     model: bike.modelId !== null && name !== undefined ? { id: bike.modelId, name } : null,
+    loadCase: bike.loadCase?.name ?? null,
     ...specOf(bike),
     createdAt: bike.createdAt.toISOString(),
     updatedAt: bike.updatedAt.toISOString(),

@@ -541,7 +541,8 @@ export class QuotesService {
       if (err instanceof YupValidationError) throw new ConflictError('The new springs do not fit the bike as recorded; correct the bike first.', 'bike-mismatch', toFieldErrors(err));
       throw err;
     }
-    await manager.save(Bike, { ...bike, ...outcome.bike, updatedAt: now });
+    // A new spring ends any load case: its solo settings were the old spring's.
+    await manager.save(Bike, { ...bike, ...outcome.bike, loadCase: null, updatedAt: now });
     await manager.insert(SetupLogEntry, {
       bikeId: bike.id,
       kind: 'change',

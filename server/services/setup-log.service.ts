@@ -4,6 +4,7 @@
  * as its entry. The baseline is the settings before the first entry; back-to-baseline is the plan
  * from the current settings back to it.
  */
+import { EntityManager } from 'typeorm';
 import { ValidationError as YupValidationError } from 'yup';
 import { bikeSpecSchema } from '../../shared/schemas/bike.schema';
 import { toFieldErrors } from '../../shared/schemas/field-errors';
@@ -65,6 +66,43 @@ export interface BaselineAnswer {
   plan: BackToBaseline | null;
 }
 
+/**
+ * Puts a change on the bike and writes its log entry, inside the caller's transaction. A new spring
+ * ends any load case the bike was set for: its solo settings were the old spring's.
+ */
+export async function writeSetupChange(
+  manager: EntityManager,
+  user: AuthUser,
+  bike: Bike,
+  input: SetupChangeInput,
+  now: Date,
+  patch: Partial<Pick<Bike, 'loadCase'>> = {},
+): Promise<number> {
+  const outcome = applySetupChange(specOf(bike), input);
+  if (!outcome.ok) throw new ValidationError(outcome.fields);
+  try {
+    await bikeSpecSchema.validate(outcome.bike, { abortEarly: false });
+  } catch (err) {
+    if (err instanceof YupValidationError) throw new ValidationError(toChangePaths(toFieldErrors(err), input));
+    throw err;
+  }
+  const swapsSpring = !!(input.front?.spring || input.rear?.spring);
+  await manager.save(Bike, { ...bike, ...outcome.bike, ...(swapsSpring ? { loadCase: null } : {}), ...patch, updatedAt: now });
+  const entry = await manager.save(
+    manager.create(SetupLogEntry, {
+      bikeId: bike.id,
+      kind: 'change',
+      sizingRecordId: null,
+      createdById: user.id,
+      note: input.note ?? '',
+      before: settingsOf(bike),
+      after: settingsOf(outcome.bike),
+      createdAt: now,
+    }),
+  );
+  return entry.id;
+}
+
 export class SetupLogService {
   private readonly bikes: BikesService;
 
@@ -91,30 +129,13 @@ export class SetupLogService {
   async change(user: AuthUser, bikeId: number, input: SetupChangeInput): Promise<SetupChangeAnswer> {
     const entryId = await this.ctx.db.write(async (manager) => {
       const bike = await findOwnedBike(manager, user, bikeId);
-      const outcome = applySetupChange(specOf(bike), input);
-      if (!outcome.ok) throw new ValidationError(outcome.fields);
-      try {
-        await bikeSpecSchema.validate(outcome.bike, { abortEarly: false });
-      } catch (err) {
-        if (err instanceof YupValidationError) throw new ValidationError(toChangePaths(toFieldErrors(err), input));
-        throw err;
-      }
-      const now = this.ctx.now();
-      await manager.save(Bike, { ...bike, ...outcome.bike, updatedAt: now });
-      const entry = await manager.save(
-        manager.create(SetupLogEntry, {
-          bikeId,
-          kind: 'change',
-          sizingRecordId: null,
-          createdById: user.id,
-          note: input.note ?? '',
-          before: settingsOf(bike),
-          after: settingsOf(outcome.bike),
-          createdAt: now,
-        }),
-      );
-      return entry.id;
+      return writeSetupChange(manager, user, bike, input, this.ctx.now());
     });
+    return this.answer(user, bikeId, entryId);
+  }
+
+  /** The entry just written, as the log lists it, with the bike as it is now. */
+  async answer(user: AuthUser, bikeId: number, entryId: number): Promise<SetupChangeAnswer> {
     const log = await this.list(user, bikeId);
     const entry = log.entries.find((e) => e.id === entryId);
     if (!entry) throw new Error(`setup log entry ${entryId} vanished after its write`);

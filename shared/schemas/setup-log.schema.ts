@@ -48,3 +48,14 @@ export const setupChangeSchema = object({
   if (!change || hasChange(change.front) || hasChange(change.rear)) return true;
   return this.createError({ path: '', message: 'Say what changed: a preload setting, a clicker or a spring, at the front or the rear.' });
 });
+
+/** POST /api/bikes/:id/load-case: the case to set by its name, or null to ride solo. */
+export const loadCaseSwitchSchema = object({
+  name: string()
+    .transform((value: unknown) => (typeof value === 'string' ? value.trim() : value))
+    .typeError('Name the load case as text, or send null to ride solo.')
+    .defined('Name the load case to set, or send null to ride solo.')
+    .nullable()
+    .min(1, 'Name the load case to set, or send null to ride solo.')
+    .max(40, 'A load case name is at most 40 characters.'),
+}).typeError('Send the load case as { name }.');

@@ -429,7 +429,7 @@ const loadCasesSchema = array()
 export const sizingRequestSchema = object({
   discipline: string()
     .required("The riding discipline is missing: choose a profile such as 'road'.")
-    .matches(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "Discipline must be a profile name in lower case, like 'road' or 'two-up'.")
+    .matches(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, "Discipline must be a profile name in lower case, like 'road' or 'touring'.")
     .max(40, 'Discipline must be at most 40 characters.'),
   bike: bikeSchema,
   rider: riderSchema,

@@ -58,7 +58,7 @@ export const weighInSchema = object({
     }),
   discipline: string()
     .trim()
-    .required('Choose how you ride: road, track, touring, two-up, trail or motocross.')
+    .required('Choose how you ride: road, track, touring, trail or motocross.')
     .matches(/^[a-z][a-z0-9]*(-[a-z0-9]+)*$/, 'Choose one of the riding disciplines listed.')
     .max(40, 'Choose one of the riding disciplines listed.'),
   position: mixed<RidingPosition>()

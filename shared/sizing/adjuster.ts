@@ -67,12 +67,12 @@ export function describeAdjustment(unit: AdjusterUnit, plan: AdjustmentPhrase): 
   return `${plan.direction} ${countOf(unit, plan.roundedChangeUnits)} of preload (to ${to})`;
 }
 
-/** The change alone, short, as a card's heading: "add 1 1/2 turns", "remove 2 steps", "spacer 4 mm longer". */
+/** The change alone, short, as a card's heading: "add 1 1/2 turns", "remove 2 steps", "fit a spacer 4 mm longer". */
 export function describeChange(unit: AdjusterUnit, changeUnits: number): string {
   const amount = Math.abs(changeUnits);
   if (unit === 'mm') {
     if (amount < 1e-9) return 'keep the spacer';
-    return `spacer ${formatNumber(amount, 2)} mm ${changeUnits > 0 ? 'longer' : 'shorter'}`;
+    return `fit a spacer ${formatNumber(amount, 2)} mm ${changeUnits > 0 ? 'longer' : 'shorter'}`;
   }
   if (amount < 1e-9) return 'keep the setting';
   return `${changeUnits > 0 ? 'add' : 'remove'} ${countOf(unit, changeUnits)}`;

@@ -55,17 +55,21 @@ export function describeDecision(decision: Decision, format: QuantityFormat): De
   };
 }
 
-/** A load case as the rider sets it: the change from the solo setting, or why the spring cannot carry it. */
+/** A load case as the rider sets it: "With luggage (15 kg): add 2 turns from the solo setting ...". */
 export function describeLoadCase(loadCase: LoadCaseResult, format: QuantityFormat): string {
-  const name = `${loadCase.name} (${format.mass(loadCase.massKg)})`;
+  return `${loadCase.name} (${format.mass(loadCase.massKg)}): ${describeLoadCaseSetting(loadCase, format)}`;
+}
+
+/** The setting alone: the change from the solo setting, or why the spring cannot carry the load. */
+export function describeLoadCaseSetting(loadCase: LoadCaseResult, format: QuantityFormat): string {
   const to = describePosition(loadCase.unit, loadCase.position);
   const sag = loadCase.riderSagMm === null ? 'past the full travel' : format.length(loadCase.riderSagMm);
   if (!loadCase.carries) {
     const stop = loadCase.limit === 'coil-bind' ? 'as far as coil-bind allows' : loadCase.limit === 'range' ? "the adjuster's last setting" : 'its best setting';
-    return `${name}: the ${nameSpring(loadCase.spring, format)} spring cannot carry it. At ${to}, ${stop}, rider sag is ${sag}, past its window: leave the load behind or fit a stiffer spring.`;
+    return `the ${nameSpring(loadCase.spring, format)} spring cannot carry it. At ${to}, ${stop}, rider sag is ${sag}, past its window: leave the load behind or fit a stiffer spring.`;
   }
-  if (Math.abs(loadCase.changeUnits) < 1e-9) return `${name}: leave the preload at the solo setting; rider sag ${sag}.`;
-  return `${name}: ${describeChange(loadCase.unit, loadCase.changeUnits)} from the solo setting (to ${to}); rider sag ${sag}. Go back to the solo setting without it.`;
+  if (Math.abs(loadCase.changeUnits) < 1e-9) return `leave the preload at the solo setting; rider sag ${sag}.`;
+  return `${describeChange(loadCase.unit, loadCase.changeUnits)} from the solo setting (to ${to}); rider sag ${sag}. Go back to the solo setting without it.`;
 }
 
 /** Names a spring by its label: a dual-rate one as "6.5/9 N/mm dual-rate", never by its rate at sag. */
@@ -235,8 +239,6 @@ class Words {
       }
       case 'none-in-catalogue':
         return `No ${r.family} spring in the catalogue keeps both sags in their windows at a setting the adjuster can make.`;
-      case 'weights-only':
-        return 'The sags are predicted from the weights; no readings were taken.';
       case 'targets-invalid':
         return "The end's target windows cannot be aimed at: the rider-sag middle is not above the static one.";
     }

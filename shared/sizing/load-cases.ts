@@ -64,7 +64,8 @@ export function adviseLoadCases(
       position: set.position,
       preloadMm: set.preloadMm,
       riderSagMm: set.riderSagMm,
-      carries: isInsideWindow(set.riderSagMm, windows.riderSagMm),
+      // Back at the solo rider sag the load is carried, wherever solo sits; stopped short, only inside the window.
+      carries: set.riderSagMm !== null && (!stopped || isInsideWindow(set.riderSagMm, windows.riderSagMm)),
       limit: stopped ? (solo.coilLimited ? 'coil-bind' : 'range') : null,
     };
   });

@@ -80,6 +80,8 @@ export interface Bike extends BikeSpec {
   nickname: string;
   /** The shop model it was made from; null when entered by hand or the model was deleted. */
   model: { id: number; name: string } | null;
+  /** The load case it is set for (its name); null while it rides solo. */
+  loadCase: string | null;
   createdAt: string;
   updatedAt: string;
 }

@@ -384,7 +384,6 @@ export type DecisionReason =
   | { code: 'static-topped-out'; riderSagMm: number }
   | { code: 'shelf-short'; spring: SpringOffer; riderSagMm: number | null; staticSagMm: number | null; rider: RangeMm; static: RangeMm }
   | { code: 'none-in-catalogue'; family: string }
-  | { code: 'weights-only' }
   | { code: 'targets-invalid' };
 
 /**
@@ -458,7 +457,7 @@ export interface LoadCaseResult {
   position: number;
   preloadMm: number;
   riderSagMm: number | null;
-  /** Rider sag stays inside its window with the load, at a setting the adjuster can make. */
+  /** A setting the adjuster can make brings rider sag back to solo's, or, stopped short, still inside its window. */
   carries: boolean;
   /** What stops the setting short: the adjuster's range, coil-bind, or a rider sag past its window at the limit. */
   limit: 'range' | 'coil-bind' | null;

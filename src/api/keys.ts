@@ -28,6 +28,8 @@ export const riderKeys = {
   record: (id: number) => `/sizing-records/${id}`,
   setupLog: (bikeId: number) => `/bikes/${bikeId}/setup-log`,
   backToBaseline: (bikeId: number) => `/bikes/${bikeId}/setup-log/back-to-baseline`,
+  loadCases: (bikeId: number) => `/bikes/${bikeId}/load-cases`,
+  loadCase: (bikeId: number) => `/bikes/${bikeId}/load-case`,
   bikeModels: '/bike-models',
   bikeModel: (id: number) => `/bike-models/${id}`,
   targetProfiles: '/target-profiles',

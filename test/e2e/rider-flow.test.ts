@@ -5,7 +5,7 @@
  * the stored request. Then the preload change goes in the setup log, a re-measure follows, and
  * back to baseline lists the undo. At wide size the result sits in two columns.
  *
- * Hand-worked check: static sag = extended − mean(pushed, lifted) = 560 − (532 + 540) / 2 = 24 mm.
+ * Hand-worked check: static sag = extended − mean(pushed, lifted) = 560 − (534 + 538) / 2 = 24 mm.
  */
 import { Page } from 'playwright-core';
 
@@ -27,13 +27,13 @@ const rider = DEMO_ACCOUNTS.find((account) => account.role === 'rider')!;
 type EndReadings = { extended: string; static: readonly [string, string]; rider: readonly [string, string] };
 
 const READINGS: Record<'front' | 'rear', EndReadings> = {
-  front: { extended: '560', static: ['532', '540'], rider: ['512', '520'] },
-  rear: { extended: '600', static: ['586', '592'], rider: ['541', '549'] },
+  front: { extended: '560', static: ['534', '538'], rider: ['517', '523'] },
+  rear: { extended: '600', static: ['564', '567'], rider: ['514', '518'] },
 };
 
 const REMEASURE: Record<'front' | 'rear', EndReadings> = {
-  front: { extended: '560', static: ['533', '539'], rider: ['513', '519'] },
-  rear: { extended: '600', static: ['588', '594'], rider: ['551', '557'] },
+  front: { extended: '560', static: ['535', '538'], rider: ['518', '523'] },
+  rear: { extended: '600', static: ['585', '588'], rider: ['535', '539'] },
 };
 
 const live = startLiveAppForFile();
@@ -171,7 +171,7 @@ test('a rider measures a bike from a shop model, resumes, adjusts and re-measure
   await measureEnd(page, 'rear', READINGS.rear, true);
 
   await page.waitForURL((url) => url.pathname.endsWith('/review'));
-  // 560 − (532 + 540) / 2 = 560 − 536 = 24 mm, worked by hand.
+  // 560 − (534 + 538) / 2 = 560 − 536 = 24 mm, worked by hand.
   expect(await byTestId(page, 'review-front-static-sag').innerText()).toBe('24 mm');
   await screenshot(page, 'rider-measure-review-phone');
   await page.getByRole('button', { name: 'Work it out' }).click();

@@ -92,7 +92,7 @@ describe('sizing request schema', () => {
     ['an adjuster maximum below its minimum', (r) => ((r.rear.adjuster.minPosition = 5), (r.rear.adjuster.maxPosition = 4), (r.rear.adjuster.position = 4)), 'rear.adjuster.maxPosition', /above its minimum/],
     ['a missing adjuster', (r) => delete r.front.adjuster, 'front.adjuster', /preload adjuster is missing/],
     ['a missing spring family', (r) => (r.front.family = '  '), 'front.family', /Spring family is missing/],
-    ['an unknown discipline format', (r) => (r.discipline = 'Road Race!'), 'discipline', /lower case, like 'road' or 'two-up'/],
+    ['an unknown discipline format', (r) => (r.discipline = 'Road Race!'), 'discipline', /lower case, like 'road' or 'touring'/],
     ['a damping ratio of 0', (r) => (r.dampingRatio = 0), 'dampingRatio', /about 0.2 to 0.5/],
     ['no end at all', (r) => (delete r.front, delete r.rear), 'ends', /front, the rear or both/],
     ['a missing rider', (r) => delete r.rider, 'rider', /rider is missing/],

@@ -2,6 +2,7 @@ import { Link, router, useLocalSearchParams } from 'expo-router';
 import { View } from 'react-native';
 
 import { BikeForm } from '@/components/garage/bike-form';
+import { LoadCasePanel } from '@/components/garage/load-case-panel';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
@@ -47,6 +48,7 @@ export default function BikeDetailScreen() {
           onPress={() => void remove(bike.id).then(() => router.navigate('/rider'))}
         />
       </View>
+      <LoadCasePanel bike={bike} />
       <BikeForm spec={bike} nickname={bike.nickname} submitLabel="Save corrections" onSubmit={(values) => update(bike.id, values)} />
     </Screen>
   );

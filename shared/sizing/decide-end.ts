@@ -259,36 +259,26 @@ export function offerOf(c: CandidateResult): SpringOffer {
 }
 
 function settingOf(unit: AdjusterUnit, preload: PreloadAdvice): SettingStep {
-  return {
-    unit,
-    changeUnits: preload.roundedChangeUnits,
-    position: preload.position,
-    riderSagMm: preload.riderSagAfterMm,
-    staticSagMm: preload.staticSagAfterMm,
-    staticSagMaxMm: preload.staticSagAfterMaxMm,
-  };
+  return settingStep(unit, preload.roundedChangeUnits, preload.position, preload.riderSagAfterMm, preload.staticSagAfterMm, preload.staticSagAfterMaxMm);
 }
 
 function settingFromSettable(unit: AdjusterUnit, setting: SettableSetting): SettingStep {
-  return {
-    unit,
-    changeUnits: setting.changeUnits,
-    position: setting.position,
-    riderSagMm: setting.riderSagMm,
-    staticSagMm: setting.staticSagMm,
-    staticSagMaxMm: null,
-  };
+  return settingStep(unit, setting.changeUnits, setting.position, setting.riderSagMm, setting.staticSagMm, null);
 }
 
 function candidateSetting(unit: AdjusterUnit, c: CandidateResult): SettingStep {
-  return {
-    unit,
-    changeUnits: c.preloadUnits ?? 0,
-    position: c.position ?? 0,
-    riderSagMm: c.riderSagMm,
-    staticSagMm: c.staticSagMm,
-    staticSagMaxMm: null,
-  };
+  return settingStep(unit, c.preloadUnits ?? 0, c.position ?? 0, c.riderSagMm, c.staticSagMm, null);
+}
+
+function settingStep(
+  unit: AdjusterUnit,
+  changeUnits: number,
+  position: number,
+  riderSagMm: number | null,
+  staticSagMm: number | null,
+  staticSagMaxMm: number | null,
+): SettingStep {
+  return { unit, changeUnits, position, riderSagMm, staticSagMm, staticSagMaxMm };
 }
 
 function outcome(

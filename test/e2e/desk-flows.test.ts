@@ -19,6 +19,7 @@ import { Page } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/seed/demo-accounts';
 import { formatNumber } from '../../shared/sizing/format';
+import type { SizingRecord } from '../../shared/types/garage';
 import type { QuoteView, SpringOption } from '../../shared/types/quote';
 import { apiFor } from './api-helpers';
 import { signInThroughForm, waitForPath } from './auth-helpers';
@@ -147,11 +148,23 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   // The saved pass is the desk's, on the customer's bike, sized from the readings.
   const { records } = await call<{ records: { id: number; source: string }[] }>('GET', `/bikes/${bikeId}/sizing-records`, deskToken);
   expect(records.map((r) => r.source)).toEqual(['desk']);
+  // The desk reads the same decision the rider's result shows, written by the same code.
+  const saved = (await call<{ record: SizingRecord }>('GET', `/sizing-records/${records[0].id}`, deskToken)).record;
+  for (const end of ['front', 'rear'] as const) {
+    expect(await visible(wide.page, `result-${end}-decision-headline`).innerText()).toBe(saved.result[end]!.decision.text.headline);
+  }
 
   await visible(wide.page, 'readings-make-quote').click();
   await wide.page.waitForURL((url) => url.pathname.startsWith('/desk/quotes/'));
   await wide.page.getByRole('heading', { name: /^Quote Q-/, level: 1 }).waitFor();
   const firstId = Number(new URL(wide.page.url()).pathname.split('/').at(-1));
+  // The editor marks the spring the decision puts forward, and only that one.
+  for (const end of ['front', 'rear'] as const) {
+    const pick = saved.result[end]!.decision.pick;
+    if (pick) await visible(wide.page, `spring-option-${pick.sku}`).getByText(`${pick.sku} · ${pick.rateNmm} N/mm · recommended`).waitFor();
+  }
+  const marked = wide.page.locator('[data-testid^="spring-option-"]:visible', { hasText: '· recommended' });
+  expect(await marked.count()).toBe(['front', 'rear'].filter((end) => saved.result[end as 'front' | 'rear']!.decision.pick).length);
   // The fork spring the result recommends, from the shelf.
   const { record } = await call<{ record: { result: { front: { recommendation: { inStock: { sku: string; rateNmm: number } } } } } }>(
     'GET',

@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useQuantityFormat } from '@/components/units/quantity-format';
+import { useBusyAction } from '@/hooks/use-busy-action';
 import { useLoadCases, useLoadCaseSwitch } from '@/hooks/use-load-cases';
 import { adjusterUnit, describePosition } from '@shared/sizing/adjuster';
 import { describeLoadCaseSetting } from '@shared/sizing/decision-text';
@@ -24,23 +25,15 @@ export function LoadCasePanel({ bike }: { bike: Bike }) {
   const format = useQuantityFormat();
   const { data, error } = useLoadCases(bike.id);
   const switchTo = useLoadCaseSwitch(bike.id);
-  const [busy, setBusy] = useState(false);
+  const { busy, error: failed, run } = useBusyAction();
   const [done, setDone] = useState<string | null>(null);
-  const [failed, setFailed] = useState<string | null>(null);
   if (error || !data) return null;
 
-  async function choose(name: string | null) {
-    setBusy(true);
-    setFailed(null);
-    try {
+  const choose = (name: string | null) =>
+    run(async () => {
       const entry = await switchTo(name);
       setDone(`${entry.note}: in the setup log.`);
-    } catch (cause) {
-      setFailed((cause as Error).message);
-    } finally {
-      setBusy(false);
-    }
-  }
+    });
 
   const soloLine = ENDS.filter((end) => bike[end] && data.solo[end] !== undefined)
     .map((end) => `${PART[end]} ${describePosition(adjusterUnit(bike[end]!.adjuster.kind), data.solo[end]!)}`)

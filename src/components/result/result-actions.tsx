@@ -8,6 +8,7 @@ import { Card } from '@/components/ui/card';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useStartDraft } from '@/hooks/use-draft';
 import { requestQuote } from '@/hooks/use-quote-request';
+import { useBusyAction } from '@/hooks/use-busy-action';
 import { useSetupChange } from '@/hooks/use-setup-log';
 import { describeChange } from '@shared/sizing/adjuster';
 import type { SizingRecord } from '@shared/types/garage';
@@ -22,27 +23,14 @@ export function ResultActions({ record }: { record: SizingRecord }) {
   const bikeId = record.bikeId;
   const recordChange = useSetupChange(bikeId ?? 0);
   const startDraft = useStartDraft();
-  const [busy, setBusy] = useState(false);
+  const { busy, error, run } = useBusyAction();
   const [done, setDone] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const [quoteAsked, setQuoteAsked] = useState<string | null>(null);
   // Only a preload the decision tells the rider to set: never one under "check before acting".
   const changed = (['front', 'rear'] as const).filter((end) => {
     const result = record.result[end];
     return result && !result.decision.legacy && result.decision.steps.some((s) => s.kind === 'preload') && preloadUnitsOf(result) !== 0;
   });
-
-  async function run(action: () => Promise<void>) {
-    setBusy(true);
-    setError(null);
-    try {
-      await action();
-    } catch (cause) {
-      setError((cause as Error).message);
-    } finally {
-      setBusy(false);
-    }
-  }
 
   const applyPreload = () =>
     run(async () => {

@@ -106,7 +106,9 @@ export class BikesService {
     const spec = await checkSpec(input);
     await this.ctx.db.write(async (manager) => {
       const bike = await findOwnedBike(manager, user, id);
-      await manager.save(Bike, { ...bike, ...spec, nickname: input.nickname, updatedAt: this.ctx.now() });
+      // A corrected spring or adjuster leaves the load case's solo positions meaningless.
+      const keepsCase = sameSpringAndAdjuster(bike.front, spec.front) && sameSpringAndAdjuster(bike.rear, spec.rear);
+      await manager.save(Bike, { ...bike, ...spec, nickname: input.nickname, loadCase: keepsCase ? bike.loadCase : null, updatedAt: this.ctx.now() });
     });
     return this.get(user, id);
   }
@@ -136,6 +138,12 @@ export class BikesService {
       lastSizing: latest.get(bike.id) ?? null,
     }));
   }
+}
+
+function sameSpringAndAdjuster(a: FrontSpec | RearSpec | null, b: FrontSpec | RearSpec | null): boolean {
+  if (!a || !b) return a === b;
+  const key = (e: FrontSpec | RearSpec) => [e.rateNmm, e.secondRateNmm, e.breakMm, e.preloadMm, e.adjuster.kind, e.adjuster.mmPerUnit, e.adjuster.position].join('|');
+  return key(a) === key(b);
 }
 
 export function toBikeView(bike: Bike, modelName: ReadonlyMap<number, string>): BikeView {

@@ -67,8 +67,19 @@ export class LoadCasesService {
   private async plan(manager: EntityManager, bike: Bike): Promise<{ record: SizingRecord | null; cases: LoadCaseOption[] }> {
     const record = await manager.findOne(SizingRecord, { where: { bikeId: bike.id }, order: { id: 'DESC' } });
     if (!record) return { record: null, cases: [] };
-    const thresholds = await this.ctx.sizingData.warningThresholds();
-    const cases = planLoadCases({ bike: { masses: bike.masses, front: bike.front, rear: bike.rear }, solo: soloOf(bike), request: record.request, result: record.result, thresholds });
+    const [thresholds, forks, shocks] = await Promise.all([
+      this.ctx.sizingData.warningThresholds(),
+      bike.front ? this.ctx.sizingData.candidates('fork', bike.front.family) : [],
+      bike.rear ? this.ctx.sizingData.candidates('shock', bike.rear.family) : [],
+    ]);
+    const cases = planLoadCases({
+      bike: { masses: bike.masses, front: bike.front, rear: bike.rear },
+      solo: soloOf(bike),
+      request: record.request,
+      result: record.result,
+      catalogue: { front: forks, rear: shocks },
+      thresholds,
+    });
     return { record, cases };
   }
 }

@@ -67,8 +67,10 @@ export interface BaselineAnswer {
 }
 
 /**
- * Puts a change on the bike and writes its log entry, inside the caller's transaction. A new spring
- * ends any load case the bike was set for: its solo settings were the old spring's.
+ * Puts a change on the bike and writes its log entry, inside the caller's transaction. The load
+ * case goes with the settings it was set from: a new spring or a preload turned by hand ends it,
+ * unless the change is the load-case switch itself (`patch`), which may also move nothing at all
+ * (a case that needs no more preload than the one before it) and is still logged.
  */
 export async function writeSetupChange(
   manager: EntityManager,
@@ -76,9 +78,10 @@ export async function writeSetupChange(
   bike: Bike,
   input: SetupChangeInput,
   now: Date,
-  patch: Partial<Pick<Bike, 'loadCase'>> = {},
+  patch?: Pick<Bike, 'loadCase'>,
 ): Promise<number> {
-  const outcome = applySetupChange(specOf(bike), input);
+  const moves = !!(input.front || input.rear);
+  const outcome = moves || !patch ? applySetupChange(specOf(bike), input) : ({ ok: true, bike: specOf(bike) } as const);
   if (!outcome.ok) throw new ValidationError(outcome.fields);
   try {
     await bikeSpecSchema.validate(outcome.bike, { abortEarly: false });
@@ -86,8 +89,9 @@ export async function writeSetupChange(
     if (err instanceof YupValidationError) throw new ValidationError(toChangePaths(toFieldErrors(err), input));
     throw err;
   }
-  const swapsSpring = !!(input.front?.spring || input.rear?.spring);
-  await manager.save(Bike, { ...bike, ...outcome.bike, ...(swapsSpring ? { loadCase: null } : {}), ...patch, updatedAt: now });
+  const touchesPreload = (['front', 'rear'] as const).some((end) => input[end]?.spring || input[end]?.preloadPosition !== undefined);
+  const loadCase = patch ? patch.loadCase : touchesPreload ? null : bike.loadCase;
+  await manager.save(Bike, { ...bike, ...outcome.bike, loadCase, updatedAt: now });
   const entry = await manager.save(
     manager.create(SetupLogEntry, {
       bikeId: bike.id,

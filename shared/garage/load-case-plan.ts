@@ -6,6 +6,7 @@
  */
 
 import { computePreloadRange } from '../sizing/adjuster';
+import { findCatalogueTwin } from '../sizing/candidates';
 import { makeForkModel } from '../sizing/fork';
 import { adviseLoadCases } from '../sizing/load-cases';
 import { addedLoadN } from '../sizing/loads';
@@ -14,7 +15,7 @@ import { isDualRate, makeSpringLaw } from '../sizing/spring-law';
 import type { EndModel } from '../sizing/end-model';
 import type { BikeSpec } from '../types/bike';
 import type { LoadCaseOption } from '../types/load-case';
-import type { EndKind, FrontRequest, RearRequest, SizingRequest, SizingResult, WarningThresholds } from '../types/sizing';
+import type { CatalogueSpring, EndKind, FrontRequest, RearRequest, SizingRequest, SizingResult, WarningThresholds } from '../types/sizing';
 import { toFrontRequest, toRearRequest } from './build-sizing-request';
 
 const ENDS: readonly EndKind[] = ['front', 'rear'];
@@ -25,10 +26,12 @@ export interface LoadCasePlanInput {
   solo: Partial<Record<EndKind, number>>;
   request: SizingRequest;
   result: SizingResult;
+  /** The catalogue springs of each end's fit: a fitted spring's coil-bind length where the bike does not give it. */
+  catalogue: Partial<Record<EndKind, readonly CatalogueSpring[]>>;
   thresholds: Pick<WarningThresholds, 'adjusterResolution' | 'minCaptivePreloadMm' | 'coilBindMarginMm' | 'luggageRearShare'>;
 }
 
-export function planLoadCases({ bike, solo, request, result, thresholds }: LoadCasePlanInput): LoadCaseOption[] {
+export function planLoadCases({ bike, solo, request, result, catalogue, thresholds }: LoadCasePlanInput): LoadCaseOption[] {
   const cases = request.loadCases ?? [];
   const options: LoadCaseOption[] = cases.map((c) => ({ name: c.name, massKg: c.massKg, ends: {} }));
   for (const end of ENDS) {
@@ -42,9 +45,10 @@ export function planLoadCases({ bike, solo, request, result, thresholds }: LoadC
     const loads = { staticN: advised.loads.staticN, riderN: advised.loads.riderN };
     const riderSagMm = model.sagAtLoad(spring, preloadMm, loads.staticN + loads.riderN);
     if (riderSagMm === null) continue;
-    // The pass's coil-bind length holds only for the spring it was made with.
+    // As the engine does: the pass's coil-bind length if it was made with this spring, else the catalogue's.
     const passed = request[end];
-    const maxDeflectionMm = passed && passed.rateNmm === spec.rateNmm ? (passed.maxDeflectionMm ?? null) : null;
+    const maxDeflectionMm =
+      (passed && passed.rateNmm === spec.rateNmm ? passed.maxDeflectionMm : undefined) ?? findCatalogueTwin(catalogue[end] ?? [], spec)?.maxDeflectionMm ?? null;
     const adjusterRange = computePreloadRange(endRequest.adjuster, preloadMm, thresholds.minCaptivePreloadMm);
     const coilLimitMm = maxDeflectionMm === null ? Infinity : maxDeflectionMm - thresholds.coilBindMarginMm - model.springStrokeMm;
     const results = adviseLoadCases(

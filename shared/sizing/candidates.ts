@@ -88,6 +88,23 @@ function fitRank(c: CandidateResult): number {
   return c.fit === null ? 5 : rankFit(c.fit);
 }
 
+/** A catalogue spring this close in rate (share) is taken for the same spring. */
+const SAME_SPRING_SHARE = 0.005;
+
+/** A catalogue spring of the same fit and label rate: the fitted spring's coil-bind length when none is given. */
+export function findCatalogueTwin(
+  springs: readonly CatalogueSpring[],
+  fitted: { family: string; rateNmm: number; secondRateNmm?: number | null },
+): CatalogueSpring | null {
+  for (const s of springs) {
+    if (s.family !== fitted.family) continue;
+    if (Math.abs(s.rateNmm - fitted.rateNmm) > SAME_SPRING_SHARE * fitted.rateNmm) continue;
+    if ((s.secondRateNmm ?? null) !== (fitted.secondRateNmm ?? null)) continue;
+    return s;
+  }
+  return null;
+}
+
 /** How far a setting's sags land from the middles of their windows, each in half its window's width. */
 export function scoreMiss(riderSagMm: number | null, staticSagMm: number | null, windows: SagWindows): number | null {
   if (riderSagMm === null || staticSagMm === null) return null;

@@ -30,11 +30,13 @@ import type { BandAssessment } from './reading-band';
 import type { SettableSetting } from './settable-setting';
 import { isInsideWindow, type SagWindows } from './targets';
 
-export interface RateMismatch {
-  impliedRateNmm: number;
-  bandNmm: number | null;
-  statedRateNmm: number;
-}
+/**
+ * Readings that disagree with the stated spring and the weights: the rate they imply, or, with a
+ * topped-out static reading (no rate to imply), the total load the rider reading gives.
+ */
+export type ReadingMismatch =
+  | { kind: 'rate'; impliedRateNmm: number; bandNmm: number | null; statedRateNmm: number }
+  | { kind: 'load'; readingN: number; weighedN: number };
 
 /** A spacer under the spring that lets the fitted spring's rate be set inside both windows. */
 export interface SpacerOption {
@@ -63,12 +65,15 @@ export interface DecisionInput {
   /** The fitted spring's setting, scored as the candidates are. */
   currentMissScore: number | null;
   idealRateNmm: number | null;
-  mismatch: RateMismatch | null;
+  mismatch: ReadingMismatch | null;
   frictionSuspect: boolean;
   band: BandAssessment | null;
   frictionBandMm: { static: number | null; rider: number | null } | null;
-  /** The static reading was topped out: the rider reading gave the change. */
-  staticToppedOut: { riderSagMm: number } | null;
+  /**
+   * The static reading was topped out: the rider reading gave the change, and static sag after it
+   * is only bounded. The bounds at the spacer's setting and at the pick's, for whichever is advised.
+   */
+  staticToppedOut: { riderSagMm: number; spacerMaxMm: number | null; pickMaxMm: number | null } | null;
   ranked: RankedCandidates;
   spacer: SpacerOption | null;
   marginalRatePct: number;
@@ -94,7 +99,7 @@ function decide(input: DecisionInput): Decision {
   return input.verdict === 'keep' ? decideKeep(input) : decideChange(input);
 }
 
-function decideCheck(input: DecisionInput, mismatch: RateMismatch): Decision {
+function decideCheck(input: DecisionInput, mismatch: ReadingMismatch): Decision {
   const items: RemeasureItem[] = input.frictionSuspect
     ? ['friction', 'weights', 'geometry', 'spring-label', 'preload']
     : ['weights', 'geometry', 'spring-label', 'friction', 'preload'];
@@ -103,7 +108,11 @@ function decideCheck(input: DecisionInput, mismatch: RateMismatch): Decision {
     'check',
     'unsure',
     [{ kind: 'remeasure', end: input.end, items }],
-    [{ code: 'rate-mismatch', impliedRateNmm: mismatch.impliedRateNmm, bandNmm: mismatch.bandNmm, statedRateNmm: mismatch.statedRateNmm }],
+    [
+      mismatch.kind === 'rate'
+        ? { code: 'rate-mismatch', impliedRateNmm: mismatch.impliedRateNmm, bandNmm: mismatch.bandNmm, statedRateNmm: mismatch.statedRateNmm }
+        : { code: 'load-mismatch', readingN: mismatch.readingN, weighedN: mismatch.weighedN },
+    ],
     null,
     null,
   );
@@ -124,7 +133,7 @@ function decideKeep(input: DecisionInput): Decision {
     });
   }
   const marginal = findMarginalReasons(input, preload);
-  appendToppedOut(input, preload, steps, reasons);
+  appendToppedOut(input, preload.staticSagAfterMaxMm, steps, reasons);
   if (marginal.length === 0) return outcome(input, 'keep', baseCertainty(input), steps, reasons, null, null);
 
   const better = findBetter(input);
@@ -155,11 +164,15 @@ function decideChange(input: DecisionInput): Decision {
   const pickCandidate = inStock ?? best;
   let pick: SpringOffer | null = null;
   // A spacer is the cheaper fix where the rate suits and only the adjuster falls short.
+  const bounds = input.staticToppedOut;
+  let staticMaxMm = preload?.staticSagAfterMaxMm ?? null;
   if (input.spacer) {
-    steps.push({ kind: 'spacer', lengthMm: input.spacer.lengthMm, setting: settingFromSettable(input.unit, input.spacer.setting) });
+    staticMaxMm = bounds?.spacerMaxMm ?? null;
+    steps.push({ kind: 'spacer', lengthMm: input.spacer.lengthMm, setting: settingFromSettable(input.unit, input.spacer.setting, staticMaxMm) });
   } else if (pickCandidate) {
     pick = offerOf(pickCandidate);
-    steps.push({ kind: 'fit-spring', spring: pick, setting: candidateSetting(input.unit, pickCandidate) });
+    staticMaxMm = bounds?.pickMaxMm ?? null;
+    steps.push({ kind: 'fit-spring', spring: pick, setting: candidateSetting(input.unit, pickCandidate, staticMaxMm) });
   } else {
     steps.push({ kind: 'order-spring', rateNmm: input.idealRateNmm, family: input.family });
     reasons.push({ code: 'none-in-catalogue', family: input.family });
@@ -174,7 +187,7 @@ function decideChange(input: DecisionInput): Decision {
       static: input.windows.staticSagMm,
     });
   }
-  if (preload) appendToppedOut(input, preload, steps, reasons);
+  appendToppedOut(input, staticMaxMm, steps, reasons);
   const certainty = input.band?.crosses ? 'marginal' : baseCertainty(input);
   return outcome(input, 'change', certainty, steps, reasons, pick, pickCandidate && pick ? dampingFor(input, pickCandidate, false) : null);
 }
@@ -236,10 +249,11 @@ function beats(c: CandidateResult, input: DecisionInput): boolean {
   return input.currentMissScore === null || c.missScore === null || c.missScore < input.currentMissScore - BETTER_BY;
 }
 
-function appendToppedOut(input: DecisionInput, preload: PreloadAdvice, steps: DecisionStep[], reasons: DecisionReason[]): void {
+/** After a topped-out static reading: say so, and measure static sag again at the setting advised last. */
+function appendToppedOut(input: DecisionInput, staticMaxMm: number | null, steps: DecisionStep[], reasons: DecisionReason[]): void {
   if (!input.staticToppedOut) return;
   reasons.push({ code: 'static-topped-out', riderSagMm: input.staticToppedOut.riderSagMm });
-  steps.push({ kind: 'measure-static', staticSagMaxMm: preload.staticSagAfterMaxMm });
+  steps.push({ kind: 'measure-static', staticSagMaxMm: staticMaxMm });
 }
 
 function baseCertainty(input: DecisionInput): Certainty {
@@ -262,12 +276,12 @@ function settingOf(unit: AdjusterUnit, preload: PreloadAdvice): SettingStep {
   return settingStep(unit, preload.roundedChangeUnits, preload.position, preload.riderSagAfterMm, preload.staticSagAfterMm, preload.staticSagAfterMaxMm);
 }
 
-function settingFromSettable(unit: AdjusterUnit, setting: SettableSetting): SettingStep {
-  return settingStep(unit, setting.changeUnits, setting.position, setting.riderSagMm, setting.staticSagMm, null);
+function settingFromSettable(unit: AdjusterUnit, setting: SettableSetting, staticSagMaxMm: number | null): SettingStep {
+  return settingStep(unit, setting.changeUnits, setting.position, setting.riderSagMm, setting.staticSagMm, staticSagMaxMm);
 }
 
-function candidateSetting(unit: AdjusterUnit, c: CandidateResult): SettingStep {
-  return settingStep(unit, c.preloadUnits ?? 0, c.position ?? 0, c.riderSagMm, c.staticSagMm, null);
+function candidateSetting(unit: AdjusterUnit, c: CandidateResult, staticSagMaxMm: number | null): SettingStep {
+  return settingStep(unit, c.preloadUnits ?? 0, c.position ?? 0, c.riderSagMm, c.staticSagMm, staticSagMaxMm);
 }
 
 function settingStep(

@@ -95,13 +95,15 @@ class Words {
       case 'change':
         return this.changeHeadline(d);
       case 'check': {
-        const mismatch = d.reasons.find((r) => r.code === 'rate-mismatch');
+        const mismatch = d.reasons.find((r) => r.code === 'rate-mismatch' || r.code === 'load-mismatch');
         const remeasure = d.steps.find((s) => s.kind === 'remeasure');
         const part = remeasure?.kind === 'remeasure' ? PART[remeasure.end] : 'end';
-        const disagree =
-          mismatch?.code === 'rate-mismatch'
-            ? `the readings imply a ${this.f.rate(mismatch.impliedRateNmm)} spring, but ${this.f.rate(mismatch.statedRateNmm)} is stated`
-            : 'the readings and the stated spring disagree';
+        let disagree = 'the readings and the stated spring disagree';
+        if (mismatch?.code === 'rate-mismatch') {
+          disagree = `the readings imply a ${this.f.rate(mismatch.impliedRateNmm)} spring, but ${this.f.rate(mismatch.statedRateNmm)} is stated`;
+        } else if (mismatch?.code === 'load-mismatch') {
+          disagree = `with the ${nameSpring(d.installed, this.f)} spring as stated, the rider reading puts ${formatNumber(mismatch.readingN, 0)} N on the ${part}, against ${formatNumber(mismatch.weighedN, 0)} N from the weights`;
+        }
         return `Check before acting: ${disagree}. Re-measure the ${part} before changing anything.`;
       }
       default:
@@ -230,6 +232,10 @@ class Words {
         const band = r.bandNmm === null ? '' : ` ± ${this.f.rate(r.bandNmm)}`;
         const pct = formatNumber((Math.abs(r.impliedRateNmm - r.statedRateNmm) / r.statedRateNmm) * 100, 0);
         return `The readings imply a ${this.f.rate(r.impliedRateNmm)}${band} spring against the ${this.f.rate(r.statedRateNmm)} stated: ${pct} % apart. The figures below hold only if the readings and the weights are right.`;
+      }
+      case 'load-mismatch': {
+        const pct = formatNumber((Math.abs(r.readingN - r.weighedN) / r.weighedN) * 100, 0);
+        return `The rider reading, on the stated spring and preload, gives ${formatNumber(r.readingN, 0)} N in all against ${formatNumber(r.weighedN, 0)} N from the weights: ${pct} % apart. The figures below hold only if the readings and the weights are right.`;
       }
       case 'static-topped-out':
         return `The static reading shows no sag (topped out), so the change comes from the rider reading alone (${this.f.length(r.riderSagMm)} of rider sag); static sag after it is bounded, not known.`;

@@ -1,10 +1,12 @@
 /**
  * Results stored by engines before 2.0.0 answered with a verdict sentence, not a decision. They
  * are shown as they were made: the headline is the sentence that engine wrote, the kind follows
- * its verdict, and nothing it did not work out (steps, reasons, load cases) is made up for it.
+ * its verdict, the spring it put forward stays the one a quote is built on, and nothing it did not
+ * work out (steps, reasons, load cases) is made up for it.
  */
 
 import type { DecisionKind, EndResult, SizingResult, Verdict } from '../types/sizing';
+import { offerOf } from './decide-end';
 
 type StoredEnd = Omit<EndResult, 'decision' | 'rideFrequencyHz'> &
   Partial<Pick<EndResult, 'decision'>> & { rideFrequencyHz: { current: number | null; after?: number | null; recommended?: number | null; note: string } };
@@ -30,6 +32,8 @@ function isLegacyEnd(end: EndResult | undefined): boolean {
 
 function upgradeEnd(end: StoredEnd, engineVersion: string): EndResult {
   if (end.decision) return end as EndResult;
+  // Those engines put forward their best spring in stock, else the best to order, wherever the verdict was not keep.
+  const offered = end.verdict !== null && end.verdict !== 'keep' ? (end.recommendation.inStock ?? end.recommendation.best) : null;
   const note = `Worked out by engine ${engineVersion}, which gave a verdict without steps; measure again for advice in steps.`;
   return {
     ...end,
@@ -46,7 +50,7 @@ function upgradeEnd(end: StoredEnd, engineVersion: string): EndResult {
       installed: { rateNmm: end.installedRateNmm, secondRateNmm: null },
       steps: [],
       reasons: [],
-      pick: null,
+      pick: offered ? offerOf(offered) : null,
       dampingHint: null,
       text: { headline: end.verdictText, steps: [], reasons: [note], certainty: note, damping: null },
       legacy: true,

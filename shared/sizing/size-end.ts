@@ -5,6 +5,7 @@
  */
 
 import type {
+  CandidateResult,
   CatalogueSpring,
   EndKind,
   EndResult,
@@ -22,8 +23,8 @@ import type {
   Verdict,
 } from '../types/sizing';
 import { adjusterUnit, computePreloadRange, describePosition } from './adjuster';
-import { rankCandidates, scoreMiss, type RankedCandidates } from './candidates';
-import { decideEnd, type SpacerOption } from './decide-end';
+import { findCatalogueTwin, rankCandidates, scoreMiss, type RankedCandidates } from './candidates';
+import { decideEnd, type ReadingMismatch, type SpacerOption } from './decide-end';
 import type { EndModel } from './end-model';
 import { computeImpliedRate, isRateMismatch } from './implied-rate';
 import { adviseLoadCases, type LoadCaseInput, type SoloSetting } from './load-cases';
@@ -46,6 +47,7 @@ import {
   warnBottomedOut,
   warnCoilBind,
   warnFittedCoilBind,
+  warnFittedCoilBindAim,
   warnFrictionBand,
   warnImpliedRate,
   warnNoCandidate,
@@ -55,7 +57,9 @@ import {
   warnRiderReadingBottomed,
   warnRoundingOutsideWindow,
   warnSmallStaticSag,
+  warnRiderLoadMismatch,
   warnStaticLoadMismatch,
+  warnStaticLoadOverBound,
   warnStaticReadingToppedOut,
   warnSwappedPair,
   warnTargetInvalid,
@@ -82,8 +86,6 @@ interface Calibration {
   staticMaxN: number | null;
 }
 
-/** A catalogue spring this close in rate (share) stands in for the fitted one's coil-bind length. */
-const SAME_SPRING_SHARE = 0.005;
 /** Spacers are tried up to this many lengths before giving up. */
 const MAX_SPACER_TRIES = 60;
 
@@ -122,18 +124,11 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
   );
 
   const implied = measured ? computeImpliedRate(model, measured, intakeLoads) : null;
-  const mismatch =
-    implied !== null && isRateMismatch(implied.rateNmm, installedRateNmm, thresholds.impliedRateMismatchPct)
-      ? { impliedRateNmm: implied.rateNmm, bandNmm: implied.bandNmm, statedRateNmm: installedRateNmm }
-      : null;
+  const mismatch = findMismatch(implied, installedRateNmm, calibration, intakeLoads, thresholds.impliedRateMismatchPct);
   const frictionSuspect = warnings.some((w) => w.code === 'friction-band-large');
-  if (mismatch) warnings.push(warnImpliedRate(end, mismatch.impliedRateNmm, installedRateNmm, frictionSuspect));
-  if (calibration?.source === 'calibrated' && intakeLoads.staticN > 0) {
-    const offPct = (Math.abs(calibration.loads.staticN - intakeLoads.staticN) / intakeLoads.staticN) * 100;
-    if (offPct > thresholds.staticLoadMismatchPct) {
-      warnings.push(warnStaticLoadMismatch(end, calibration.loads.staticN, intakeLoads.staticN, thresholds.staticLoadMismatchPct));
-    }
-  }
+  if (mismatch?.kind === 'rate') warnings.push(warnImpliedRate(end, mismatch.impliedRateNmm, installedRateNmm, frictionSuspect));
+  if (mismatch?.kind === 'load') warnings.push(warnRiderLoadMismatch(end, mismatch.readingN, mismatch.weighedN));
+  checkStaticLoad(end, calibration, intakeLoads, thresholds.staticLoadMismatchPct, warnings);
 
   const idealRateNmm = usable ? idealRateFor(model, windows, loads) : null;
 
@@ -183,7 +178,7 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     if (verdict === 'preload-out-of-range' && aim !== null) {
       adjusterCause = aim < adjusterRangeMm.min || aim > adjusterRangeMm.max ? 'range' : aim > coilLimitMm ? 'coil-bind' : 'steps';
       if (adjusterCause === 'range') warnings.push(warnAdjusterRange(aim, adjusterRangeMm));
-      if (adjusterCause === 'coil-bind') warnings.push(warnCoilBind(1, thresholds.coilBindMarginMm));
+      if (adjusterCause === 'coil-bind') warnings.push(warnFittedCoilBindAim(aim, coilLimitMm));
       if (adjusterCause === 'steps' && setting) {
         warnings.push(warnRoundingOutsideWindow(describePosition(adjusterUnit(request.adjuster.kind), setting.position), setting.riderSagMm, setting.staticSagMm, windows));
       }
@@ -223,7 +218,10 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
     frictionSuspect,
     band,
     frictionBandMm: measured ? { static: measured.staticBandMm, rider: measured.riderBandMm } : null,
-    staticToppedOut: calibration?.source === 'rider-reading' && measured ? { riderSagMm: measured.riderSagMm } : null,
+    staticToppedOut:
+      calibration?.source === 'rider-reading' && measured && calibration.staticMaxN !== null
+        ? { riderSagMm: measured.riderSagMm, ...boundsAfter(model, spring, calibration.staticMaxN, spacer, ranked.inStock ?? ranked.best) }
+        : null,
     ranked,
     spacer,
     marginalRatePct: thresholds.marginalRatePct,
@@ -231,7 +229,7 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
   });
 
   const now: RideSetting | null = riderSagMm === null ? null : { spring, preloadMm: currentPreloadMm, riderSagMm };
-  const settled = settleOn(decision.kind, spring, installed, grid, adjusterRangeMm.max, preload, ranked, spacer, thresholds.coilBindMarginMm);
+  const settled = settleOn(decision.kind, spring, installed, grid, adjusterRangeMm.max, coilLimitMm, preload, ranked, spacer, thresholds.coilBindMarginMm);
   const ride = assessRide(model, loads, now, settled?.ride ?? null, settled?.newSpring ?? false, input.dampingRatio);
   const loadCases: LoadCaseResult[] =
     usable && settled && input.loadCases.length > 0 ? adviseLoadCases(model, loads, settled.solo, input.loadCases, windows) : [];
@@ -283,6 +281,58 @@ export function sizeEnd(input: EndInput, context: SizingContext): EndResult {
   };
 }
 
+/**
+ * Readings that disagree with the stated spring and the weights. With both readings, the rate they
+ * imply (5a); with a topped-out static reading there is no rate to imply, so the total load the
+ * rider reading gives on the stated spring and preload is held against the weighed total.
+ */
+function findMismatch(
+  implied: { rateNmm: number; bandNmm: number | null } | null,
+  installedRateNmm: number,
+  calibration: Calibration | null,
+  intake: LoadsN,
+  limitPct: number,
+): ReadingMismatch | null {
+  if (implied) {
+    return isRateMismatch(implied.rateNmm, installedRateNmm, limitPct)
+      ? { kind: 'rate', impliedRateNmm: implied.rateNmm, bandNmm: implied.bandNmm, statedRateNmm: installedRateNmm }
+      : null;
+  }
+  if (calibration?.source !== 'rider-reading') return null;
+  const readingN = calibration.loads.staticN + calibration.loads.riderN;
+  const weighedN = intake.staticN + intake.riderN;
+  return weighedN > 0 && (Math.abs(readingN - weighedN) / weighedN) * 100 > limitPct ? { kind: 'load', readingN, weighedN } : null;
+}
+
+/**
+ * The static load from the readings against the weighed one (section 6): calibrated where both
+ * readings were good; with a topped-out static reading, only its bound can be held against the weights.
+ */
+function checkStaticLoad(end: EndKind, calibration: Calibration | null, intake: LoadsN, limitPct: number, warnings: SizingWarning[]): void {
+  if (!calibration || !(intake.staticN > 0)) return;
+  if (calibration.source === 'calibrated') {
+    const offPct = (Math.abs(calibration.loads.staticN - intake.staticN) / intake.staticN) * 100;
+    if (offPct > limitPct) warnings.push(warnStaticLoadMismatch(end, calibration.loads.staticN, intake.staticN, limitPct));
+  } else if (calibration.staticMaxN !== null && intake.staticN > calibration.staticMaxN * (1 + limitPct / 100)) {
+    warnings.push(warnStaticLoadOverBound(end, calibration.staticMaxN, intake.staticN));
+  }
+}
+
+/** Static sag after the change, at most, at the setting the decision may advise: the spacer's, or the pick's. */
+function boundsAfter(
+  model: EndModel,
+  spring: SpringLaw,
+  staticMaxN: number,
+  spacer: SpacerOption | null,
+  pick: CandidateResult | null,
+): { spacerMaxMm: number | null; pickMaxMm: number | null } {
+  const pickLaw = pick ? makeSpringLaw(pick.rateNmm, pick.secondRateNmm, pick.breakMm) : null;
+  return {
+    spacerMaxMm: spacer ? model.sagAtLoad(spring, spacer.setting.preloadMm, staticMaxN) : null,
+    pickMaxMm: pick && pickLaw && pick.setPreloadMm !== null ? model.sagAtLoad(pickLaw, pick.setPreloadMm, staticMaxN) : null,
+  };
+}
+
 /** Rider sag at the unrounded preload the advice aims at, held to what the adjuster reaches. */
 function aimRiderSag(model: EndModel, spring: SpringLaw, loads: LoadsN, preload: PreloadAdvice | null): number | null {
   if (!preload || !Number.isFinite(preload.neededMm)) return null;
@@ -294,17 +344,6 @@ function aimRiderSag(model: EndModel, spring: SpringLaw, loads: LoadsN, preload:
 function toVerdict(assessment: SpringAssessment): Verdict {
   if (assessment.setting?.fit === 'both') return 'keep';
   return assessment.rateFit === 'suits' ? 'preload-out-of-range' : assessment.rateFit;
-}
-
-/** A catalogue spring of the same fit and label rate: the fitted spring's coil-bind length when none is given. */
-function findCatalogueTwin(springs: readonly CatalogueSpring[], request: FrontRequest | RearRequest): CatalogueSpring | null {
-  for (const s of springs) {
-    if (s.family !== request.family) continue;
-    if (Math.abs(s.rateNmm - request.rateNmm) > SAME_SPRING_SHARE * request.rateNmm) continue;
-    if ((s.secondRateNmm ?? null) !== (request.secondRateNmm ?? null)) continue;
-    return s;
-  }
-  return null;
 }
 
 /**
@@ -353,6 +392,7 @@ function settleOn(
   installed: SpringName,
   grid: SettableGrid,
   adjusterMaxMm: number,
+  coilLimitMm: number,
   preload: PreloadAdvice | null,
   ranked: RankedCandidates,
   spacer: SpacerOption | null,
@@ -361,10 +401,12 @@ function settleOn(
   if (kind === 'check' || kind === 'none') return null;
   const coilLimited = grid.rangeMm.max < adjusterMaxMm;
   if (kind === 'change' && spacer) {
-    const shifted = { ...grid, currentPreloadMm: grid.currentPreloadMm + spacer.lengthMm, rangeMm: { min: grid.rangeMm.min, max: grid.rangeMm.max + spacer.lengthMm } };
+    // The spacer adds its length to every setting; coil-bind stays where it is.
+    const shiftedMax = Math.min(adjusterMaxMm + spacer.lengthMm, coilLimitMm);
+    const shifted = { ...grid, currentPreloadMm: grid.currentPreloadMm + spacer.lengthMm, rangeMm: { min: grid.rangeMm.min, max: shiftedMax } };
     if (spacer.setting.riderSagMm === null) return null;
     const ride = { spring, preloadMm: spacer.setting.preloadMm, riderSagMm: spacer.setting.riderSagMm };
-    return { ride, newSpring: false, solo: { ...ride, name: installed, position: spacer.setting.position, grid: shifted, coilLimited } };
+    return { ride, newSpring: false, solo: { ...ride, name: installed, position: spacer.setting.position, grid: shifted, coilLimited: coilLimitMm < adjusterMaxMm + spacer.lengthMm } };
   }
   const pick = kind === 'change' ? (ranked.inStock ?? ranked.best) : null;
   if (pick && pick.setPreloadMm !== null && pick.riderSagMm !== null && pick.position !== null) {

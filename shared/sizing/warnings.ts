@@ -93,6 +93,30 @@ export function warnStaticLoadMismatch(end: EndKind, calibratedN: number, weighe
   );
 }
 
+export function warnStaticLoadOverBound(end: EndKind, maxN: number, weighedN: number): SizingWarning {
+  return warning(
+    'static-load-mismatch',
+    `The static reading shows the ${END_NAME[end]} topped out, so at most ${formatNumber(maxN, 0)} N of the bike rests on it, against ${formatNumber(weighedN, 0)} N from the weights.`,
+    `Check the stated preload${end === 'rear' ? ' and gas force' : ''} (a topped-out end means the spring holds more than the bike weighs on it), the bike's front share and the unsprung mass.`,
+  );
+}
+
+export function warnRiderLoadMismatch(end: EndKind, readingN: number, weighedN: number): SizingWarning {
+  return warning(
+    'implied-rate-mismatch',
+    `On the stated spring and preload, the rider reading puts ${formatNumber(readingN, 0)} N on the ${END_NAME[end]}, against ${formatNumber(weighedN, 0)} N from the weights.`,
+    "Re-check the rate on the spring's label, the stated preload, the rider and gear weights and the rider's rear share, then measure again.",
+  );
+}
+
+export function warnFittedCoilBindAim(neededMm: number, limitMm: number): SizingWarning {
+  return warning(
+    'coil-bind',
+    `The fitted spring would need ${formatNumber(neededMm, 1)} mm of preload, but it coil-binds at full travel beyond ${formatNumber(limitMm, 1)} mm.`,
+    'The setting shown stops short of coil-bind; a longer spring of the same rate, or one of another rate, would reach the target.',
+  );
+}
+
 export function warnFittedCoilBind(marginMm: number, requiredMm: number): SizingWarning {
   return warning(
     'coil-bind',
@@ -225,7 +249,7 @@ export function warnNoCandidate(catalogueSize: number): SizingWarning {
     'no-candidate',
     catalogueSize === 0
       ? 'The catalogue holds no spring of this family.'
-      : 'No catalogue spring of this family fits the adjuster and clears coil-bind.',
+      : 'No catalogue spring of this family keeps both sags in their windows at a setting the adjuster can make.',
     'Order a spring near the ideal rate, or check the spring family.',
   );
 }

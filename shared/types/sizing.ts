@@ -381,6 +381,7 @@ export type DecisionReason =
   | { code: 'too-soft' | 'too-stiff'; installed: SpringName; idealRateNmm: number | null }
   | { code: 'adjuster-limit'; cause: 'range' | 'steps' | 'coil-bind'; neededMm: number; rangeMm: RangeMm }
   | { code: 'rate-mismatch'; impliedRateNmm: number; bandNmm: number | null; statedRateNmm: number }
+  | { code: 'load-mismatch'; readingN: number; weighedN: number }
   | { code: 'static-topped-out'; riderSagMm: number }
   | { code: 'shelf-short'; spring: SpringOffer; riderSagMm: number | null; staticSagMm: number | null; rider: RangeMm; static: RangeMm }
   | { code: 'none-in-catalogue'; family: string }

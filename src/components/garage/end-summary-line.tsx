@@ -10,7 +10,7 @@ import { useTheme } from '@/theme';
 const DECISION_WORDS: Record<DecisionKind, string> = {
   keep: 'keep the spring',
   marginal: 'spring works, marginal',
-  change: 'change the spring',
+  change: 'change needed',
   check: 'check before acting',
   none: 'no advice',
 };

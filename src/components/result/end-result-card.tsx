@@ -70,7 +70,7 @@ export function EndResultCard({ result }: { result: EndResult }) {
   const id = (name: string) => `result-${result.end}-${name}`;
   const { preload, rideFrequencyHz, decision, sagDifference, frictionBandMm } = result;
   const hasPreloadStep = decision.legacy ? preload !== null : decision.steps.some((s) => s.kind === 'preload');
-  const pickIsChange = decision.kind === 'change';
+  const pickIsChange = decision.kind === 'change' && decision.pick !== null;
   const best = result.recommendation.best;
   const dual = result.installedSpring.secondRateNmm !== null;
   return (

@@ -98,12 +98,18 @@ test('a record stored by engine 1.1.0 keeps its version and its headline, in the
     });
     const { record } = (await a.get(`/sizing-records/${fresh.id}`).expect(200)).body;
     expect(record.engineVersion).toBe('1.1.0');
-    expect(record.result.front.decision).toMatchObject({ legacy: true, steps: [], pick: null, text: { headline: 'Old sentence for the front.' } });
+    expect(record.result.front.decision).toMatchObject({ legacy: true, steps: [], text: { headline: 'Old sentence for the front.' } });
     expect(record.result.front.rideFrequencyHz).toMatchObject({ current: 2, after: 2.5 });
     expect(record.result.rear.loadCases).toEqual([]);
     expect(record.front.decision).toBeNull();
-    // A quote made from it puts no spring forward: that engine made no decision to build one on.
-    expect((await t.db.read.getRepository(SizingRecord).findOneByOrFail({ id: fresh.id })).result.rear?.decision.pick).toBeNull();
+    // A quote made from it is built on the spring that engine put forward: its best in stock, else its best to
+    // order, wherever its verdict was not keep.
+    const stored = (await t.db.read.getRepository(SizingRecord).findOneByOrFail({ id: fresh.id })).result;
+    for (const end of ['front', 'rear'] as const) {
+      const old = stored[end]!;
+      const offered = old.verdict !== 'keep' ? (old.recommendation.inStock ?? old.recommendation.best) : null;
+      expect(old.decision.pick?.sku ?? null).toBe(offered?.sku ?? null);
+    }
   } finally {
     await t.dispose();
   }

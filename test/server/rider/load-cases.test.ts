@@ -109,6 +109,32 @@ test('another rider gets the 404 an unknown bike gets', async () => {
   await other.post(`/bikes/${bikeId}/load-case`, { name: 'With luggage' }).expect(404);
 });
 
+test('a case that needs no adjuster moved is still set and logged, and solo comes back from it', async () => {
+  // A 0.2 kg tank bag at 0.3 to the rear: 1.4 N on the fork, 0.07 mm of preload, less than half a quarter turn.
+  const light = await as(t, await createAccount(t, 'rider'));
+  await light.put('/weigh-in', { ...WEIGH_IN, loads: [{ kind: 'tank-bag', massKg: 0.2, rearShare: 0.3 }] }).expect(200);
+  const id = await addHandBike(light, 'Tank bag only');
+  await light.post(`/bikes/${id}/sizing-records`, { readings: CONSISTENT }).expect(201);
+  const { cases: [bag] } = (await light.get(`/bikes/${id}/load-cases`).expect(200)).body as LoadCasesAnswer;
+  expect([bag.ends.front?.changeUnits, bag.ends.rear?.changeUnits]).toEqual([0, 0]);
+  const set = (await light.post(`/bikes/${id}/load-case`, { name: 'With luggage' }).expect(201)).body;
+  expect(set.entry.changes).toEqual([]);
+  expect(set.bike.loadCase).toBe('With luggage');
+  expect((await light.post(`/bikes/${id}/load-case`, { name: null }).expect(201)).body.bike.loadCase).toBeNull();
+});
+
+test('a preload turned by hand or a corrected spring ends the case, so solo is never set from stale positions', async () => {
+  await a.post(`/bikes/${bikeId}/load-case`, { name: 'With luggage' }).expect(201);
+  const turned = (await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 6 }, note: 'a little firmer' }).expect(201)).body;
+  expect(turned.bike.loadCase).toBeNull();
+  await a.post(`/bikes/${bikeId}/load-case`, { name: 'With luggage' }).expect(201);
+  const current = (await a.get(`/bikes/${bikeId}`).expect(200)).body.bike;
+  const { id: _id, ownerId: _o, model: _m, loadCase: _l, createdAt: _c, updatedAt: _u, draft: _d, lastSizing: _s, ...form } = current;
+  expect((await a.put(`/bikes/${bikeId}`, { ...form, nickname: 'Renamed' }).expect(200)).body.bike.loadCase).toBe('With luggage');
+  const corrected = (await a.put(`/bikes/${bikeId}`, { ...form, front: { ...form.front, rateNmm: 9 } }).expect(200)).body.bike;
+  expect(corrected.loadCase).toBeNull();
+});
+
 test('a new spring ends the case: its solo setting was the old spring\'s', async () => {
   await a.post(`/bikes/${bikeId}/load-case`, { name: 'With luggage' }).expect(201);
   const swapped = (await a.post(`/bikes/${bikeId}/setup-log`, { rear: { spring: { rateNmm: 130 } }, note: 'stiffer shock spring' }).expect(201)).body;

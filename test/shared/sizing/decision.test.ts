@@ -103,7 +103,8 @@ describe('2. a topped-out static reading keeps the rider reading', () => {
     // Off its stops a linear fork's rider sag moves 1:1 with preload (3): to reach S* = 36.6 mm remove 18.6 mm;
     // quarter turns of a 1 mm collar give 18.5 (rider 36.5 mm) or 18.75 (36.75 mm): 18.5 is nearer.
     // The static load held the fork topped out, so it is at most n*k*p0 = 500 N: static sag after
-    // is at most 500/20 - (25 - 18.5) = 18.5 mm.
+    // is at most 500/20 - (25 - 18.5) = 18.5 mm. The weights agree with the reading's total of 20*43 = 860 N:
+    // (160*0.5 - 20)*g + 88*0.35*g = 890.4 N.
     const front = roadFront({
       rakeDeg: 0,
       rateNmm: 10,
@@ -111,7 +112,8 @@ describe('2. a topped-out static reading keeps the rider reading', () => {
       adjuster: { kind: 'threaded', mmPerUnit: 1, position: 20, maxPosition: 30 },
       readings: { extendedMm: 180, staticMm: 180, riderMm: 162 },
     });
-    const result = sizeBike(roadRequest({ rear: undefined, front }), makeContext()).front!;
+    const bike = { massKg: 160, frontShare: 0.5, unsprungFrontKg: 20, unsprungRearKg: 25 };
+    const result = sizeBike(roadRequest({ rear: undefined, bike, front }), makeContext()).front!;
     expect(result.loads.source).toBe('rider-reading');
     expect(result.preload?.roundedChangeUnits).toBe(-18.5);
     expect(result.preload?.riderSagAfterMm).toBeCloseTo(36.5, 9);
@@ -123,6 +125,41 @@ describe('2. a topped-out static reading keeps the rider reading', () => {
       'After the change, measure the static sag again: it should be 18.5 mm at most.',
     ]);
     expect(result.warnings.find((w) => w.code === 'topped-out')?.hint).toMatch(/rider reading/);
+  });
+
+  it('bounds static sag after a spring change at the new spring\'s setting, not at the interim one', () => {
+    // Upright fork 2 x 20 N/mm, 15 mm of preload; readings 180 / 180 / 174.05: S_R = 5.95 mm. The total the
+    // reading gives is 40*(5.95 + 15) = 838 N and the static load at most 40*15 = 600 N. Too stiff: the 8.5 N/mm
+    // spring from the shelf at 17 3/4 turns (12.75 mm of preload) leaves static sag at most 600/17 - 12.75 =
+    // 22.54 mm, where the interim setting of the old spring leaves 13 mm: the last step must repeat the first.
+    const front = roadFront({
+      rakeDeg: 0,
+      rateNmm: 20,
+      preloadMm: 15,
+      adjuster: { kind: 'threaded', mmPerUnit: 1, position: 20, maxPosition: 30 },
+      readings: { extendedMm: 180, staticMm: 180, riderMm: 174.05 },
+    });
+    const result = sizeBike(roadRequest({ rear: undefined, bike: { massKg: 160, frontShare: 0.5, unsprungFrontKg: 20, unsprungRearKg: 25 }, front }), makeContext()).front!;
+    expect(result.decision.kind).toBe('change');
+    const fit = result.decision.steps.find((s) => s.kind === 'fit-spring');
+    const measure = result.decision.steps.find((s) => s.kind === 'measure-static');
+    if (fit?.kind !== 'fit-spring' || measure?.kind !== 'measure-static') throw new Error('expected a spring to fit and a static sag to measure');
+    expect(measure.staticSagMaxMm).toBe(fit.setting.staticSagMaxMm);
+    expect(measure.staticSagMaxMm).toBeCloseTo(600 / 17 - 12.75, 9);
+    expect(measure.staticSagMaxMm).not.toBe(result.preload?.staticSagAfterMaxMm);
+  });
+
+  it('checks the rider reading\'s total load against the weights, and the static bound too', () => {
+    // Upright fork 2 x 5 N/mm, 40 mm of preload; readings 180 / 180 / 120: the rider reading gives 10*(60 + 40) =
+    // 1000 N in all, against (220*0.5 - 20)*g + 88*0.35*g = 90 g + 30.8 g = 1184.6 N weighed: 16 % apart, past the
+    // 15 % setting (common practice). The preload holds at most 10*40 = 400 N topped out, against 882.6 N weighed.
+    const front = roadFront({ rakeDeg: 0, rateNmm: 5, preloadMm: 40, readings: { extendedMm: 180, staticMm: 180, riderMm: 120 } });
+    const result = sizeBike(roadRequest({ rear: undefined, front }), makeContext()).front!;
+    expect(result.decision.kind).toBe('check');
+    expect(result.decision.text.headline).toBe(
+      'Check before acting: with the 5 N/mm spring as stated, the rider reading puts 1000 N on the fork, against 1185 N from the weights. Re-measure the fork before changing anything.',
+    );
+    expect(result.warnings.map((w) => w.message)).toContain('The static reading shows the fork topped out, so at most 400 N of the bike rests on it, against 883 N from the weights.');
   });
 
   it('shock: the change is divided by the leverage ratio', () => {
@@ -176,6 +213,18 @@ describe('4. a passenger is a load case on the solo spring', () => {
     expect(loadCase.position).toBe(8.75 + 9.75);
     expect(loadCase.riderSagMm).toBeCloseTo(38.568 - 2.5 * (14.625 - (75 * 0.95 * g * 2.5) / 120), 3);
     expect(loadCase).toMatchObject({ carries: true, limit: null, spring: { rateNmm: 120, secondRateNmm: null } });
+  });
+
+  it('keeps a spacer\'s load cases clear of coil-bind', () => {
+    // 120 N/mm that binds at 66.9 mm: at most 66.9 - 3 - 50 = 13.9 mm of preload. The collar's 3 turns of 1.5 mm
+    // from 8 mm stop at 12.5 mm, so a 2 mm spacer serves solo at 2 1/2 turns (13.75 mm); a 90 kg passenger then
+    // finds no step left before coil-bind.
+    const rear = roadRear({ rateNmm: 120, preloadMm: 8, maxDeflectionMm: 66.9, adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 0, maxPosition: 3 } });
+    const result = sizeBike(roadRequest({ front: undefined, rear, loadCases: [{ name: 'With passenger', massKg: 90, rearShare: 1 }] }), makeContext({ springs: { front: [], rear: [] } })).rear!;
+    expect(result.decision.steps.map((s) => s.kind)).toContain('spacer');
+    const [loadCase] = result.loadCases;
+    expect(loadCase.preloadMm).toBeLessThanOrEqual(66.9 - 3 - 50);
+    expect(loadCase).toMatchObject({ carries: false, limit: 'coil-bind' });
   });
 
   it('says when the solo spring cannot carry it: the adjuster runs out and rider sag is left past its window', () => {

@@ -11,7 +11,7 @@ import { ThemedText } from '@/components/ui/themed-text';
 import { useSizingRecord } from '@/hooks/use-sizing-records';
 import { useLayout, useTheme } from '@/theme';
 
-/** A saved pass: per end the sags, the verdict, the preload change and the springs; front | rear on a wide screen. */
+/** A saved pass: per end the decision, then the sags, preload and springs it rests on; front | rear on a wide screen. */
 export default function ResultScreen() {
   const { spacing } = useTheme();
   const { isWide } = useLayout();
@@ -37,7 +37,7 @@ export default function ResultScreen() {
     <Screen width="table">
       <ThemedText type="title">Result</ThemedText>
       <ThemedText color="textMuted">
-        {record.profileLabel} · {new Date(record.createdAt).toLocaleString()}
+        {record.profileLabel} · {new Date(record.createdAt).toLocaleString()} · engine {record.engineVersion}
       </ThemedText>
       <View style={{ flexDirection: isWide ? 'row' : 'column', gap: spacing.xl, alignItems: 'flex-start' }} testID="result-columns">
         {ends.map((end) => (

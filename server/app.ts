@@ -10,7 +10,7 @@ import express, { Express, RequestHandler } from 'express';
 import helmet from 'helmet';
 import { AppContext } from './context';
 import { authGuards } from './middleware/auth';
-import { apiErrorHandler, apiNotFound } from './middleware/error-handler';
+import { apiErrorHandler, apiNotFound, pageErrorHandler } from './middleware/error-handler';
 import { apiRoutes } from './routes';
 import { PAYMENT_WEBHOOK_PATH } from './routes/payments.router';
 import { mountRoutes } from './routes/route-table';
@@ -99,5 +99,6 @@ export function createApp(ctx: AppContext): Express {
   app.use('/api', api);
 
   serveWebBuild(app, ctx.config.webDir);
+  app.use(pageErrorHandler(ctx.log));
   return app;
 }

@@ -5,6 +5,7 @@ import { SmtpOutbox } from './fakes/smtp-outbox';
 import { loadJwtSecret } from './services/jwt-secret.service';
 import { createMailer, Mailer } from './services/mailer.service';
 import { openPaymentGateway, PaymentGateway } from './services/payments.service';
+import { PublicAddress } from './services/public-address.service';
 import { SizingDataCache } from './services/sizing-data.service';
 
 /** What every router and service is built from; tests assemble their own. */
@@ -22,6 +23,8 @@ export interface AppContext {
   payments: PaymentGateway;
   /** The local SMTP stand-in, when this installation runs one (never in production). */
   outbox?: SmtpOutbox;
+  /** Where links in mails point and which origin the cookie routes trust; never a request's Host. */
+  publicAddress: PublicAddress;
 }
 
 export interface OpenContext {
@@ -40,7 +43,7 @@ export async function openContext(config: ServerConfig, log: AppContext['log'], 
   const mailer = createMailer(config.smtp ?? outbox?.smtp, config.mailFrom);
   const payments = await openPaymentGateway(config, log);
   return {
-    ctx: { config, db, log, now, secrets, mailer, outbox, payments, sizingData: new SizingDataCache(db) },
+    ctx: { config, db, log, now, secrets, mailer, outbox, payments, sizingData: new SizingDataCache(db), publicAddress: new PublicAddress(config, db) },
     close: async () => {
       mailer.close();
       await payments.close();

@@ -17,6 +17,11 @@ export interface RateLimits {
   signUp: RateLimit;
   /** Reset request and reset together, keyed by client IP. */
   reset: RateLimit;
+  /**
+   * Sign-in, sign-up and reset together, keyed by client IP alone: the per-e-mail count of sign-in
+   * does not stop one address trying a new e-mail each time, and every try costs a password hash.
+   */
+  perAddress: RateLimit;
 }
 
 const MINUTE = 60_000;
@@ -32,6 +37,7 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   signIn: { limit: 10, windowMs: 15 * MINUTE },
   signUp: { limit: 5, windowMs: 60 * MINUTE },
   reset: { limit: 5, windowMs: 15 * MINUTE },
+  perAddress: { limit: 100, windowMs: 15 * MINUTE },
 };
 
 export type SmtpSettings =
@@ -54,7 +60,7 @@ export interface ServerConfig {
   corsOrigins: string[];
   /** Signs session tokens; without it a secret is generated once into the data folder. */
   jwtSecret?: string;
-  /** Where the web app is reached, for links in mails; without it, the origin of the request. */
+  /** Where the web app is reached, for links in mails; wins over the admin's setting (server/services/public-address.service.ts). */
   publicUrl?: string;
   /** Outgoing mail; without it, outside production, a local stand-in keeps every mail in the data folder. */
   smtp?: SmtpSettings;

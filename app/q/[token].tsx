@@ -7,6 +7,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { ApiError } from '@/api/client';
+import { formatMoney } from '@/components/catalogue/money';
 import { DepositPayment, PaymentReceipt } from '@/components/quotes/deposit-payment';
 import { QuoteLines } from '@/components/quotes/quote-lines';
 import { formatDate, formatDateTime } from '@/components/quotes/quote-status';
@@ -114,6 +115,18 @@ export default function CustomerQuoteScreen() {
       )}
       {quote.status === 'accepted' && quote.depositDueCents > 0 && (
         <DepositPayment amountCents={quote.depositDueCents} currency={quote.currency} onPay={payDeposit} />
+      )}
+      {quote.status === 'springs-released' && (
+        <Card tone="warning" testID="springs-released">
+          <ThemedText type="bodyStrong">The springs for this quote are no longer held</ThemedText>
+          <ThemedText>
+            {`The shop had to release springs it was holding for you, so the work cannot go ahead as quoted. The shop will contact you${
+              quote.paidCents > quote.refundedCents
+                ? `; your deposit of ${formatMoney(quote.paidCents - quote.refundedCents, quote.currency)} is refunded in full when the quote is closed.`
+                : '.'
+            }`}
+          </ThemedText>
+        </Card>
       )}
       {quote.status === 'declined' && (
         <Card>

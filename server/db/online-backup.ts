@@ -3,6 +3,7 @@
  * consistent snapshot while the server keeps writing (writes that land mid-copy restart it).
  */
 import sqlite3 from 'sqlite3';
+import { all, withFile } from './sqlite-file';
 
 /** The part of node-sqlite3's Backup object used here; its type declarations leave it out. */
 interface Backup {
@@ -13,16 +14,6 @@ interface Backup {
 }
 
 type BackupFactory = (target: string, destName: string, sourceName: string, filenameIsDest: boolean) => Backup;
-
-function open(file: string, mode: number): Promise<sqlite3.Database> {
-  return new Promise((resolve, reject) => {
-    const db = new sqlite3.Database(file, mode, (err) => (err ? reject(err) : resolve(db)));
-  });
-}
-
-function close(db: sqlite3.Database): Promise<void> {
-  return new Promise((resolve, reject) => db.close((err) => (err ? reject(err) : resolve())));
-}
 
 function runBackup(backup: Backup): Promise<void> {
   return new Promise((resolve, reject) => {
@@ -38,24 +29,11 @@ function runBackup(backup: Backup): Promise<void> {
 
 /** The result of PRAGMA integrity_check: 'ok' for a sound file. */
 export async function checkIntegrity(file: string): Promise<string> {
-  const db = await open(file, sqlite3.OPEN_READONLY);
-  try {
-    const rows = await new Promise<{ integrity_check: string }[]>((resolve, reject) =>
-      db.all('PRAGMA integrity_check', (err, result) => (err ? reject(err) : resolve(result as { integrity_check: string }[]))),
-    );
-    return rows.map((r) => r.integrity_check).join('; ');
-  } finally {
-    await close(db);
-  }
+  const rows = await withFile(file, sqlite3.OPEN_READONLY, (db) => all<{ integrity_check: string }>(db, 'PRAGMA integrity_check'));
+  return rows.map((r) => r.integrity_check).join('; ');
 }
 
 /** Copies `source` (live or not) into `target`, replacing what was there. */
-export async function copyDatabase(source: string, target: string): Promise<void> {
-  const db = await open(source, sqlite3.OPEN_READWRITE);
-  try {
-    const backup = (db as unknown as { backup: BackupFactory }).backup(target, 'main', 'main', true);
-    await runBackup(backup);
-  } finally {
-    await close(db);
-  }
+export function copyDatabase(source: string, target: string): Promise<void> {
+  return withFile(source, sqlite3.OPEN_READWRITE, (db) => runBackup((db as unknown as { backup: BackupFactory }).backup(target, 'main', 'main', true)));
 }

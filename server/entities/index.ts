@@ -11,6 +11,7 @@ import { SeedRecord } from './seed-record.entity';
 import { Shop } from './shop.entity';
 import { SpringRate } from './spring-rate.entity';
 import { StockMovement } from './stock-movement.entity';
+import { StockHold } from './stock-hold.entity';
 import { ImportBatch } from './import-batch.entity';
 import { TargetProfile } from './target-profile.entity';
 import { User } from './user.entity';
@@ -21,4 +22,4 @@ import { QuoteStatusEvent } from './quote-status-event.entity';
 import { Payment } from './payment.entity';
 import { PaymentWebhookEvent } from './payment-webhook-event.entity';
 
-export const entities = [Shop, SeedRecord, SpringRate, TargetProfile, EngineSetting, User, PasswordReset, StockMovement, ImportBatch, BikeModel, Bike, RiderProfile, MeasuringDraft, SizingRecord, SetupLogEntry, AuditEntry, ShopSettings, Quote, QuoteLine, QuoteStatusEvent, Payment, PaymentWebhookEvent];
+export const entities = [Shop, SeedRecord, SpringRate, TargetProfile, EngineSetting, User, PasswordReset, StockMovement, StockHold, ImportBatch, BikeModel, Bike, RiderProfile, MeasuringDraft, SizingRecord, SetupLogEntry, AuditEntry, ShopSettings, Quote, QuoteLine, QuoteStatusEvent, Payment, PaymentWebhookEvent];

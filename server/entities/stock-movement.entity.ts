@@ -48,4 +48,8 @@ export class StockMovement {
   /** The CSV import whose on-hand column made this count correction. */
   @Column({ type: 'integer', nullable: true })
   importBatchId!: number | null;
+
+  /** The hold a reserve, release or fit moved (stock_hold); null before holds were recorded. */
+  @Column({ type: 'integer', nullable: true })
+  holdId!: number | null;
 }

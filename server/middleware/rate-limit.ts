@@ -28,6 +28,8 @@ export interface RateLimiters {
   signIn: RequestHandler;
   signUp: RequestHandler;
   reset: RequestHandler;
+  /** One count per address shared by every route it is put on. */
+  perAddress: RequestHandler;
 }
 
 export function rateLimiters(limits: RateLimits): RateLimiters {
@@ -35,5 +37,6 @@ export function rateLimiters(limits: RateLimits): RateLimiters {
     signIn: limiter(limits.signIn, (req) => `${clientKey(req)} ${emailTried(req)}`),
     signUp: limiter(limits.signUp, clientKey),
     reset: limiter(limits.reset, clientKey),
+    perAddress: limiter(limits.perAddress, clientKey),
   };
 }

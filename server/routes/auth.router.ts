@@ -1,8 +1,9 @@
 /**
  * Sign-up, sign-in, the refresh cookie, sign-out, password reset and /me. Answers carrying a session
- * set the refresh cookie, scoped to /api/auth so no other request ever carries it.
+ * set the refresh cookie, scoped to /api/auth so no other request ever carries it; the routes that
+ * read or set it refuse requests from another site's page.
  */
-import { Request, Response } from 'express';
+import { Response } from 'express';
 import { resetRequestSchema, resetSchema, signInSchema, signUpSchema } from '../../shared/schemas/auth.schema';
 import { SessionAnswer } from '../../shared/types/account';
 import { AppContext } from '../context';
@@ -10,6 +11,7 @@ import { User } from '../entities/user.entity';
 import { UnauthorizedError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { rateLimiters } from '../middleware/rate-limit';
+import { sameSiteOnly } from '../middleware/same-site';
 import { PasswordResetService } from '../services/password-reset.service';
 import { SessionService, TOKEN_SECONDS } from '../services/session.service';
 import { toAccountUser, UsersService } from '../services/users.service';
@@ -18,18 +20,11 @@ import { parseInput } from './validate';
 
 export const REFRESH_COOKIE = 'sagwright_refresh';
 const REFRESH_COOKIE_PATH = '/api/auth';
-
-/** Where links in mails point: the configured address, else the web app the request came from. */
-function publicBaseUrl(ctx: AppContext, req: Request): string {
-  if (ctx.config.publicUrl) return ctx.config.publicUrl;
-  const origin = req.get('origin');
-  // The Expo dev server serves the screens from another origin; only a listed one is trusted.
-  if (origin && ctx.config.corsOrigins.includes(origin)) return origin;
-  return `${req.protocol}://${req.get('host')}`;
-}
+const SESSION_ENDED = 'Your session has ended; sign in again.';
 
 export function authRoutes(ctx: AppContext): RouteSpec[] {
   const limits = rateLimiters(ctx.config.rateLimits);
+  const sameSite = sameSiteOnly(ctx);
   const sessions = new SessionService(ctx);
   const users = new UsersService(ctx);
   const resets = new PasswordResetService(ctx, users);
@@ -45,7 +40,7 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       method: 'post',
       path: '/auth/sign-up',
       access: publicAccess,
-      rateLimit: limits.signUp,
+      before: [sameSite, limits.perAddress, limits.signUp],
       handler: async (req, res) => {
         const input = await parseInput(signUpSchema, req.body);
         const user = await users.create({ ...input, role: 'rider' });
@@ -56,7 +51,7 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       method: 'post',
       path: '/auth/sign-in',
       access: publicAccess,
-      rateLimit: limits.signIn,
+      before: [sameSite, limits.perAddress, limits.signIn],
       handler: async (req, res) => {
         const { email, password } = await parseInput(signInSchema, req.body);
         res.json(startSession(res, await users.signIn(email, password)));
@@ -66,13 +61,16 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       method: 'post',
       path: '/auth/refresh',
       access: publicAccess,
+      before: [sameSite],
       handler: async (req, res) => {
         const token: unknown = req.cookies?.[REFRESH_COOKIE];
-        const session = typeof token === 'string' ? await sessions.verify(token, 'refresh') : undefined;
+        // Another site's request arrives without the SameSite=Strict cookie; clearing it then would sign its visitor out.
+        if (typeof token !== 'string' || !token) throw new UnauthorizedError(SESSION_ENDED, 'session-expired');
+        const session = await sessions.verify(token, 'refresh');
         const user = session && (await users.find(session.id));
         if (!user) {
           res.clearCookie(REFRESH_COOKIE, cookie);
-          throw new UnauthorizedError('Your session has ended; sign in again.', 'session-expired');
+          throw new UnauthorizedError(SESSION_ENDED, 'session-expired');
         }
         res.json(startSession(res, user));
       },
@@ -81,6 +79,7 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       method: 'post',
       path: '/auth/sign-out',
       access: anyRole,
+      before: [sameSite],
       handler: async (req, res) => {
         await users.revokeTokens(currentUser(req).id);
         res.clearCookie(REFRESH_COOKIE, cookie);
@@ -91,10 +90,10 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       method: 'post',
       path: '/auth/reset-request',
       access: publicAccess,
-      rateLimit: limits.reset,
+      before: [limits.perAddress, limits.reset],
       handler: async (req, res) => {
         const { email } = await parseInput(resetRequestSchema, req.body);
-        await resets.request(email, publicBaseUrl(ctx, req));
+        await resets.request(email, await ctx.publicAddress.forLinks());
         res.status(202).json({ message: 'If an account uses this e-mail, a reset link is on its way.' });
       },
     },
@@ -102,7 +101,7 @@ export function authRoutes(ctx: AppContext): RouteSpec[] {
       method: 'post',
       path: '/auth/reset',
       access: publicAccess,
-      rateLimit: limits.reset,
+      before: [limits.perAddress, limits.reset],
       handler: async (req, res) => {
         const { token, password } = await parseInput(resetSchema, req.body);
         await resets.reset(token, password);

@@ -6,7 +6,6 @@ import { PaymentsService } from '../services/payments.service';
 import { QuoteMailService } from '../services/quote-mail.service';
 import { actorOf, QuotesService } from '../services/quotes.service';
 import { idParam } from './params';
-import { publicBaseUrl } from './public-url';
 import { anyRole, RouteSpec, signedIn } from './route-table';
 import { parseInput } from './validate';
 
@@ -73,7 +72,9 @@ export function quoteRoutes(ctx: AppContext): RouteSpec[] {
       path: '/quotes/:id/send',
       access: desk,
       handler: async (req, res) => {
-        res.json(await mail.send(currentUser(req), idParam(req), publicBaseUrl(ctx, req)));
+        // The address first: refused while unknown, before the quote is marked sent.
+        const baseUrl = await ctx.publicAddress.forLinks();
+        res.json(await mail.send(currentUser(req), idParam(req), baseUrl));
       },
     },
     {

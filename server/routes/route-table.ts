@@ -24,8 +24,8 @@ export interface RouteSpec {
   /** Path below /api, in Express syntax. */
   path: string;
   access: Access;
-  /** Runs after the guard, before the handler. */
-  rateLimit?: RequestHandler;
+  /** Run in order after the guard, before the handler: the same-site check, rate limits. */
+  before?: RequestHandler[];
   handler: RequestHandler;
 }
 
@@ -60,7 +60,7 @@ function guardFor(access: Access, guards: Guards): RequestHandler[] {
 export function mountRoutes(routes: RouteSpec[], guards: Guards): Router {
   const router = Router();
   for (const route of routes) {
-    const chain = [...guardFor(route.access, guards), ...(route.rateLimit ? [route.rateLimit] : []), route.handler];
+    const chain = [...guardFor(route.access, guards), ...(route.before ?? []), route.handler];
     router[route.method](route.path, ...chain.map(handle));
   }
   return router;

@@ -12,11 +12,11 @@ import { AppContext } from '../context';
 import { BikeModel } from '../entities/bike-model.entity';
 import { Bike } from '../entities/bike.entity';
 import { MeasuringDraft } from '../entities/measuring-draft.entity';
-import { User } from '../entities/user.entity';
 import { NotFoundError, ValidationError } from '../errors';
 import { AuthUser } from '../middleware/auth';
 import { assertOwnerOrStaff, seesAllCustomers } from '../middleware/ownership';
 import { parseInput } from '../routes/validate';
+import { isCustomer } from './customers.service';
 import { latestSummaries } from './sizing-record-view';
 
 export interface BikeCreateInput {
@@ -47,12 +47,12 @@ export async function findOwnedBike(manager: EntityManager, user: Pick<AuthUser,
 
 /**
  * Whose records the caller acts on: their own, or (desk and admin) the customer named. A rider
- * naming anyone else gets the 404 an unknown id gets.
+ * naming anyone else, and staff naming a staff account, get the 404 an unknown id gets.
  */
 export async function resolveRider(manager: EntityManager, user: Pick<AuthUser, 'id' | 'role'>, riderId: number | undefined): Promise<number> {
   if (riderId === undefined || riderId === user.id) return user.id;
   assertOwnerOrStaff(user, riderId);
-  if (!(await manager.existsBy(User, { id: riderId }))) throw new NotFoundError('There is no such rider.');
+  if (!(await isCustomer(manager, riderId))) throw new NotFoundError('There is no such rider.');
   return riderId;
 }
 
@@ -82,7 +82,7 @@ export class BikesService {
     const ownerId = input.riderId ?? user.id;
     if (ownerId !== user.id) {
       if (!seesAllCustomers(user)) throw new ValidationError({ riderId: 'Only the service desk can add a bike to another rider’s garage.' });
-      if (!(await read.existsBy(User, { id: ownerId }))) throw new ValidationError({ riderId: 'There is no such rider.' });
+      if (!(await isCustomer(read, ownerId))) throw new ValidationError({ riderId: 'There is no such rider.' });
     }
     const model = input.modelId === undefined ? null : await read.findOneBy(BikeModel, { id: input.modelId });
     if (input.modelId !== undefined && !model) throw new ValidationError({ modelId: 'There is no such bike model: choose one from the list.' });

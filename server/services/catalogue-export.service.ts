@@ -4,21 +4,17 @@
  * stock movements, and the re-order sheet of springs below their reorder point (also readable by
  * the import: its extra columns are ignored).
  */
-import { Readable } from 'node:stream';
-import { pipeline } from 'node:stream/promises';
-import { stringify } from 'csv-stringify';
 import type { Response } from 'express';
 import type { SpringKind } from '../../shared/types/catalogue';
 import { AppContext } from '../context';
 import { CATALOGUE_COLUMNS } from './catalogue-csv';
 import { CatalogueService } from './catalogue.service';
+import { sendCsv, type CsvCells } from './csv-export';
 import { StockService, type MovementFilter } from './stock.service';
 
-type Cells = Record<string, string | number | null>;
-
 /** A raw spring_rate row (SQLite answers a boolean as 0 or 1) as the import reads it back. */
-function catalogueCells(row: Record<string, string | number | null>): Cells {
-  const cells: Cells = {};
+function catalogueCells(row: Record<string, string | number | null>): CsvCells {
+  const cells: CsvCells = {};
   for (const { header, field } of CATALOGUE_COLUMNS) cells[header] = field === 'active' ? String(row.active === 1) : row[field];
   return cells;
 }
@@ -36,6 +32,7 @@ const MOVEMENT_COLUMNS = [
   'reason',
   'quote_id',
   'import_batch_id',
+  'hold_id',
 ];
 
 const REORDER_COLUMNS = [
@@ -54,11 +51,6 @@ const REORDER_COLUMNS = [
   'bin',
 ];
 
-async function sendCsv(res: Response, fileName: string, columns: readonly string[], rows: AsyncIterable<Cells> | Iterable<Cells>): Promise<void> {
-  res.status(200).type('text/csv; charset=utf-8').attachment(fileName);
-  await pipeline(Readable.from(rows), stringify({ header: true, columns: [...columns], cast: { number: (n) => String(n) } }), res);
-}
-
 function today(ctx: Pick<AppContext, 'now'>): string {
   return ctx.now().toISOString().slice(0, 10);
 }
@@ -71,7 +63,7 @@ export class CatalogueExportService {
     const read = this.ctx.db.read;
     const columns = ['id', ...CATALOGUE_COLUMNS.map((c) => c.field)].map((c) => `"${c}"`).join(', ');
     // Raw rows, a page at a time by id: no entity hydration for what only becomes text.
-    async function* rows(): AsyncGenerator<Cells> {
+    async function* rows(): AsyncGenerator<CsvCells> {
       let afterId = 0;
       for (;;) {
         const page: Record<string, string | number | null>[] = await read.query(`SELECT ${columns} FROM "spring_rate" WHERE "id" > ? ORDER BY "id" LIMIT 2000`, [afterId]);
@@ -85,7 +77,7 @@ export class CatalogueExportService {
 
   async movements(res: Response, filter: MovementFilter): Promise<void> {
     const source = new StockService(this.ctx).each(this.ctx.db.read.manager, filter);
-    async function* rows(): AsyncGenerator<Cells> {
+    async function* rows(): AsyncGenerator<CsvCells> {
       for await (const m of source) {
         yield {
           id: m.id,
@@ -100,6 +92,7 @@ export class CatalogueExportService {
           reason: m.reason,
           quote_id: m.quoteId,
           import_batch_id: m.importBatchId,
+          hold_id: m.holdId,
         };
       }
     }

@@ -40,6 +40,7 @@ import { ImportBatch } from '../entities/import-batch.entity';
 import { User } from '../entities/user.entity';
 import { BadRequestError, ConflictError, HttpError, NotFoundError } from '../errors';
 import { bindHeader, CANONICAL_HEADER, readRateUnit, type ColumnBinding, type HeaderBinding, type ImportField } from './catalogue-csv';
+import { unguardCell } from './csv-export';
 import { chunk, StockService, writeCatalogue, type BulkCorrection } from './stock.service';
 
 /** The catalogue fields a row sets, in the order of the INSERT and UPDATE statements. */
@@ -209,8 +210,11 @@ function readCell(binding: ColumnBinding, raw: string, rowUnit: RateUnit): Cell 
   const field = binding.field;
   const label = SPRING_FIELD_LABELS[field] ?? field;
   switch (binding.type) {
-    case 'text':
-      return text === '' ? { value: null } : checked(checkSpringText(field as SpringTextField, text), text);
+    case 'text': {
+      if (text === '') return { value: null };
+      const written = unguardCell(text);
+      return checked(checkSpringText(field as SpringTextField, written), written);
+    }
     case 'kind': {
       const kind = text.toLowerCase();
       if (text === '') return { value: null };
@@ -309,7 +313,7 @@ async function loadExisting(query: (sql: string, parameters: unknown[]) => Promi
 function skusOf(file: ParsedFile): string[] {
   const sku = file.header.bindings.find((b) => b.field === 'sku');
   if (!sku) return [];
-  return [...new Set(file.rows.map((row) => (row.cells[sku.index] ?? '').trim()).filter(Boolean))];
+  return [...new Set(file.rows.map((row) => unguardCell((row.cells[sku.index] ?? '').trim())).filter(Boolean))];
 }
 
 interface RowReading {

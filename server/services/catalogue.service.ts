@@ -183,7 +183,7 @@ export class CatalogueService {
       const spring = await this.existing(manager, id);
       if (!active && spring.reserved > 0) {
         throw new ConflictError(
-          `${spring.reserved} of ${spring.sku} are reserved for quotes: release or fit them before taking the spring out of the catalogue.`,
+          `${spring.reserved} of ${spring.sku} are held for quotes or at the counter: release or fit them before taking the spring out of the catalogue.`,
           'has-reservations',
         );
       }

@@ -1,11 +1,20 @@
 /** The desk's customers: riders found by name or e-mail with their bike count, and walk-in accounts. */
 import { randomBytes } from 'node:crypto';
+import { EntityManager } from 'typeorm';
 import type { CustomerSummary } from '../../shared/types/quote';
+import type { Role } from '../../shared/types/roles';
 import { AppContext } from '../context';
 import { Bike } from '../entities/bike.entity';
 import { User } from '../entities/user.entity';
 import { hashPassword } from './password.service';
 import { insertUser } from './users.service';
+
+/** A customer is a rider account: a staff account is never named as one. */
+export const CUSTOMER_ROLE: Role = 'rider';
+
+export function isCustomer(manager: EntityManager, id: number): Promise<boolean> {
+  return manager.existsBy(User, { id, role: CUSTOMER_ROLE });
+}
 
 export interface CustomerPage {
   customers: CustomerSummary[];
@@ -23,7 +32,7 @@ export class CustomersService {
       .createQueryBuilder('u')
       .select(['u.id AS id', 'u.name AS name', 'u.email AS email', 'u.createdAt AS createdAt'])
       .addSelect((sub) => sub.select('COUNT(*)').from(Bike, 'b').where('b.ownerId = u.id'), 'bikes')
-      .where("u.role = 'rider'");
+      .where('u.role = :role', { role: CUSTOMER_ROLE });
     if (query.q) {
       const like = `%${query.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
       qb.andWhere("(lower(u.name) LIKE :like ESCAPE '\\' OR u.email LIKE :like ESCAPE '\\')", { like });
@@ -46,7 +55,7 @@ export class CustomersService {
   /** A rider account for a walk-in, with a random password nobody knows: they set their own through a reset. */
   async createWalkIn(input: { name: string; email: string }): Promise<CustomerSummary> {
     const passwordHash = await hashPassword(randomBytes(24).toString('base64url'));
-    const user = await this.ctx.db.write((manager) => insertUser(manager, { name: input.name, email: input.email, role: 'rider' }, passwordHash, this.ctx.now()));
+    const user = await this.ctx.db.write((manager) => insertUser(manager, { name: input.name, email: input.email, role: CUSTOMER_ROLE }, passwordHash, this.ctx.now()));
     return { id: user.id, name: user.name, email: user.email, bikes: 0, createdAt: user.createdAt.toISOString() };
   }
 }

@@ -8,6 +8,7 @@
  *            sent/declined/expired ─revise─▶ superseded (a new draft, version + 1)
  *   draft, sent, accepted, deposit-paid, booked ─cancel─▶ cancelled (stock released, deposit refunded)
  *   draft, sent, accepted past the validity date ─▶ expired (stock released)
+ *   accepted, deposit-paid, booked ─the counter takes a held spring─▶ springs-released ─cancel─▶ cancelled
  */
 import { EntityManager } from 'typeorm';
 import type { QuoteStatus, QuoteStatusEventView } from '../../shared/types/quote';
@@ -22,18 +23,17 @@ export const SYSTEM_ACTOR: QuoteActor = { kind: 'system', id: null, name: 'Sagwr
 const MOVES: Record<QuoteStatus, readonly QuoteStatus[]> = {
   draft: ['sent', 'cancelled', 'expired'],
   sent: ['sent', 'accepted', 'declined', 'superseded', 'cancelled', 'expired'],
-  accepted: ['deposit-paid', 'booked', 'cancelled', 'expired'],
+  accepted: ['deposit-paid', 'booked', 'cancelled', 'expired', 'springs-released'],
   declined: ['superseded'],
-  'deposit-paid': ['booked', 'cancelled'],
-  booked: ['booked', 'fitted', 'cancelled'],
+  'deposit-paid': ['booked', 'cancelled', 'springs-released'],
+  booked: ['booked', 'fitted', 'cancelled', 'springs-released'],
+  // Without its springs the work cannot go ahead as quoted: the desk cancels, which refunds a deposit.
+  'springs-released': ['cancelled'],
   fitted: [],
   cancelled: [],
   expired: ['superseded'],
   superseded: [],
 };
-
-/** Statuses whose springs are held on the shelf for the quote. */
-export const HOLDS_STOCK: readonly QuoteStatus[] = ['accepted', 'deposit-paid', 'booked'];
 
 /** Statuses that lapse when the validity date passes: nothing has been paid yet. */
 export const EXPIRES: readonly QuoteStatus[] = ['draft', 'sent', 'accepted'];
@@ -45,6 +45,7 @@ const LABEL: Record<QuoteStatus, string> = {
   declined: 'declined',
   'deposit-paid': 'paid (deposit)',
   booked: 'booked',
+  'springs-released': 'without its springs (the parts counter released them)',
   fitted: 'fitted',
   cancelled: 'cancelled',
   expired: 'expired',

@@ -1,8 +1,9 @@
 /**
  * The desk's spring-swap quotes: built from a sizing record, priced on the server with the rule
  * of shared/money/quote-totals, moved through their status flow (server/services/quote-rules.ts).
- * Accepting reserves the quoted springs through StockService in the transaction that accepts;
- * cancelling or expiry releases them; fitting consumes them and logs the swap on the bike.
+ * Accepting puts the quoted springs on hold for the quote through StockService in the transaction
+ * that accepts; cancelling or expiry releases its holds; fitting consumes them and logs the swap on
+ * the bike. Only the counter's override takes a hold from a quote, moving it to springs-released.
  */
 import { EntityManager, In, LessThan } from 'typeorm';
 import { ValidationError as YupValidationError } from 'yup';
@@ -24,20 +25,21 @@ import { SetupLogEntry } from '../entities/setup-log-entry.entity';
 import { ShopSettings } from '../entities/shop-settings.entity';
 import { SizingRecord } from '../entities/sizing-record.entity';
 import { SpringRate } from '../entities/spring-rate.entity';
+import { StockHold } from '../entities/stock-hold.entity';
 import { User } from '../entities/user.entity';
 import { ConflictError, HttpError, NotFoundError, ValidationError } from '../errors';
 import { AuthUser } from '../middleware/auth';
 import { assertOwnerOrStaff, seesAllCustomers } from '../middleware/ownership';
 import { specOf } from './bikes.service';
 import { newQuoteToken } from './quote-token';
-import { assertCanMove, EXPIRES, HOLDS_STOCK, moveQuote, QuoteActor, SYSTEM_ACTOR } from './quote-rules';
+import { assertCanMove, EXPIRES, moveQuote, noteOnQuote, QuoteActor, SYSTEM_ACTOR } from './quote-rules';
 import { toQuoteSummaries, toQuoteView } from './quote-view';
 import { loadShop, loadShopSettings } from './shop-settings.service';
-import { StockService, toSqliteDatetime, writeCatalogue } from './stock.service';
+import { MovementResult, StockService, toSqliteDatetime, writeCatalogue } from './stock.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 /** A quote in one of these states answers a rider's second request for the same result. */
-const OPEN_FOR_REQUESTS: QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked'];
+const OPEN_FOR_REQUESTS: QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked', 'springs-released'];
 const KIND_OF_END: Record<EndKind, 'fork' | 'shock'> = { front: 'fork', rear: 'shock' };
 const PART: Record<EndKind, string> = { front: 'fork', rear: 'shock' };
 
@@ -360,23 +362,29 @@ export class QuotesService {
     await writeCatalogue(this.ctx, async (manager) => {
       const quotes = await manager.find(Quote, { where: dueWhere(now) });
       for (const quote of quotes) {
-        if (HOLDS_STOCK.includes(quote.status)) await this.releaseStock(manager, quote, null, 'Quote expired');
+        await this.stock.releaseQuoteHolds(manager, { quoteId: quote.id, userId: null, reason: `Quote ${quote.number} expired` });
         await moveQuote(manager, quote, 'expired', SYSTEM_ACTOR, now, 'expired', 'Past its validity date');
       }
     });
   }
 
-  /** The rider's yes: reserves every quoted spring with the status change, or changes nothing. */
+  /** The rider's yes: puts every quoted spring on hold for the quote with the status change, or changes nothing. */
   async accept(actor: QuoteActor, id: number, owner?: AuthUser): Promise<QuoteView> {
     await this.expireDue();
     await writeCatalogue(this.ctx, async (manager) => {
       const quote = await this.findQuote(manager, id, owner);
       assertCanMove(quote, 'accepted', 'accepted');
       const lines = await manager.find(QuoteLine, { where: { quoteId: id, kind: 'spring' }, order: { position: 'ASC' } });
+      // One hold per spring: two lines of the same spring share it.
+      const perSpring = new Map<number, { sku: string | null; quantity: number }>();
       for (const line of lines) {
+        const held = perSpring.get(line.springId!);
+        perSpring.set(line.springId!, { sku: line.sku, quantity: (held?.quantity ?? 0) + line.quantity });
+      }
+      for (const [springId, { sku, quantity }] of perSpring) {
         await this.stock
-          .reserve(manager, { springId: line.springId!, quantity: line.quantity, userId: actor.id, reason: `Quote ${quote.number} accepted`, quoteId: quote.id })
-          .catch((err) => asUnavailable(err, line.sku));
+          .reserve(manager, { springId, quantity, userId: actor.id, reason: `Quote ${quote.number} accepted`, holder: { kind: 'quote', quoteId: quote.id } })
+          .catch((err) => asUnavailable(err, sku));
       }
       await moveQuote(manager, quote, 'accepted', actor, this.ctx.now(), 'accepted');
       await pauseForFault('quote-accept-written', quote.number);
@@ -482,9 +490,7 @@ export class QuotesService {
       const quote = await this.findForWrite(manager, user, id);
       assertCanMove(quote, 'fitted', 'marked fitted');
       const lines = await manager.find(QuoteLine, { where: { quoteId: id, kind: 'spring' }, order: { position: 'ASC' } });
-      for (const line of lines) {
-        await this.stock.fit(manager, { springId: line.springId!, quantity: line.quantity, userId: user.id, reason: `Quote ${quote.number} fitted`, quoteId: quote.id, fromReserved: true });
-      }
+      await this.stock.fitQuoteHolds(manager, { quoteId: quote.id, userId: user.id, reason: `Quote ${quote.number} fitted` });
       const now = this.ctx.now();
       await this.logSpringSwap(manager, quote, lines, user, now);
       await moveQuote(manager, quote, 'fitted', actorOf(user), now, 'marked fitted');
@@ -492,12 +498,12 @@ export class QuotesService {
     return this.get(user, id);
   }
 
-  /** Releases held springs and refunds a paid deposit, with the status change. */
+  /** Releases the quote's holds and refunds a paid deposit, with the status change. */
   async cancel(user: AuthUser, id: number, reason: string): Promise<QuoteView> {
     await writeCatalogue(this.ctx, async (manager) => {
       const quote = await this.findForWrite(manager, user, id);
       assertCanMove(quote, 'cancelled', 'cancelled');
-      if (HOLDS_STOCK.includes(quote.status)) await this.releaseStock(manager, quote, user.id, `Quote ${quote.number} cancelled`);
+      await this.stock.releaseQuoteHolds(manager, { quoteId: quote.id, userId: user.id, reason: `Quote ${quote.number} cancelled` });
       const now = this.ctx.now();
       const refundable = quote.paidCents - quote.refundedCents;
       if (refundable > 0) await this.ctx.payments.refundDeposit(manager, quote, refundable, now);
@@ -506,9 +512,28 @@ export class QuotesService {
     return this.get(user, id);
   }
 
-  private async releaseStock(manager: EntityManager, quote: Quote, userId: number | null, reason: string): Promise<void> {
-    const lines = await manager.find(QuoteLine, { where: { quoteId: quote.id, kind: 'spring' } });
-    for (const line of lines) await this.stock.release(manager, { springId: line.springId!, quantity: line.quantity, userId, reason, quoteId: quote.id });
+  /**
+   * The counter's override: takes a quote's hold on a spring back to the shelf, and the quote moves
+   * to springs-released (or, already there, notes the further release), in one transaction. The
+   * movement and the quote's history both carry who did it and why.
+   */
+  async releaseOverQuote(user: AuthUser, input: { springId: number; holdId: number; reason: string }): Promise<MovementResult> {
+    return writeCatalogue(this.ctx, async (manager) => {
+      const quote = await manager
+        .createQueryBuilder(Quote, 'q')
+        .innerJoin(StockHold, 'h', 'h.quoteId = q.id')
+        .where('h.id = :holdId AND h.springId = :springId', input)
+        .getOne();
+      const reason = quote ? `Released over quote ${quote.number} v${quote.version}: ${input.reason}` : input.reason;
+      const released = await this.stock.overrideQuoteHold(manager, { ...input, userId: user.id, reason });
+      if (!quote) return released;
+      const actor: QuoteActor = { kind: 'staff', id: user.id, name: user.name };
+      const note = `The parts counter released ${-released.movement.reservedDelta} x ${released.spring.sku} held for this quote: ${input.reason}`;
+      const now = this.ctx.now();
+      if (quote.status === 'springs-released') await noteOnQuote(manager, quote, actor, now, note);
+      else await moveQuote(manager, quote, 'springs-released', actor, now, 'left without its springs', note);
+      return released;
+    });
   }
 
   private async logSpringSwap(manager: EntityManager, quote: Quote, lines: QuoteLine[], user: AuthUser, now: Date): Promise<void> {

@@ -67,7 +67,8 @@ export class SessionService {
     } catch {
       return undefined;
     }
-    if (typeof claims === 'string' || !Number.isInteger(claims.ver)) return undefined;
+    // jsonwebtoken checks exp only when present; a token without one would never expire.
+    if (typeof claims === 'string' || !Number.isInteger(claims.ver) || typeof claims.exp !== 'number') return undefined;
     const id = Number(claims.sub);
     if (!Number.isInteger(id)) return undefined;
     const [row] = (await this.ctx.db.read.query(SESSION_USER_SQL, [id])) as SessionUser[];

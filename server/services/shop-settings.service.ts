@@ -1,9 +1,9 @@
-/** The shop's terms for quotes: one row, read by every quote built, edited by the admin. */
+/** The shop's terms for quotes and its public address: one row, read by every quote built, edited by the admin. */
 import { isDeepStrictEqual } from 'node:util';
 import { EntityManager } from 'typeorm';
 import type { ShopSettingsInput } from '../../shared/schemas/shop-settings.schema';
 import type { ShopIdentity, ShopSettingsView } from '../../shared/types/quote';
-import { AppContext } from '../context';
+import type { AppContext } from '../context';
 import { Shop } from '../entities/shop.entity';
 import { ShopSettings } from '../entities/shop-settings.entity';
 import { ConflictError } from '../errors';
@@ -22,6 +22,7 @@ export function toShopSettingsView(row: ShopSettings): ShopSettingsView {
     operations: row.operations,
     quoteValidityDays: row.quoteValidityDays,
     cautions: row.cautions,
+    publicUrl: row.publicUrl,
     updatedAt: row.updatedAt.toISOString(),
   };
 }
@@ -31,6 +32,12 @@ export async function loadShopSettings(manager: EntityManager): Promise<ShopSett
   const row = await manager.findOneBy(ShopSettings, { id: SETTINGS_ID });
   if (!row) throw new ConflictError('The shop has no labour rate, tax rate or deposit rule yet: an admin sets them under shop settings.', 'no-shop-settings');
   return row;
+}
+
+/** The public address the admin set, or null; SAGWRIGHT_PUBLIC_URL wins over it (public-address.service.ts). */
+export async function loadPublicUrlSetting(manager: EntityManager): Promise<string | null> {
+  const row = await manager.findOne(ShopSettings, { select: { id: true, publicUrl: true }, where: { id: SETTINGS_ID } });
+  return row?.publicUrl ?? null;
 }
 
 export async function loadShop(manager: EntityManager): Promise<{ identity: ShopIdentity; currency: string }> {
@@ -55,6 +62,7 @@ function settingsRow(manager: EntityManager, input: ShopSettingsInput, updatedBy
     operations: input.operations.map((o) => ({ code: o.code, label: o.label, minutes: o.minutes })),
     quoteValidityDays: input.quoteValidityDays,
     cautions: input.cautions,
+    publicUrl: input.publicUrl || null,
     updatedById,
     updatedAt: now,
   });

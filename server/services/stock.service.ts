@@ -1,15 +1,20 @@
 /**
  * The stock ledger. Every change to a spring's onHand or reserved is one stock_movement row written
  * in the same transaction that changes the spring, so both always equal the sums of the movements.
- * Each method takes the caller's transaction (`db.write`'s manager), so the service desk's quote
- * flows reserve, release and fit through this same code inside their own writes. Each refuses what
- * would leave stock negative or more reserved than on hand, with a ConflictError that says why.
+ * Reserved units belong to a hold (stock_hold): a quote's, made by its acceptance, or one made by
+ * name at the counter. A spring's reserved is the sum of its open holds, and every reserve, release
+ * or fit of held units names the hold it moved, so nobody releases what another holds. Each method
+ * takes the caller's transaction (`db.write`'s manager), so the service desk's quote flows hold,
+ * release and fit through this same code inside their own writes. Each refuses what would leave
+ * stock negative or more reserved than on hand, with a ConflictError that says why.
  */
 import { EntityManager, In } from 'typeorm';
 import { MAX_STOCK_QUANTITY } from '../../shared/schemas/catalogue.schema';
-import type { MovementKind, MovementPage, StockMovementView } from '../../shared/types/catalogue';
+import type { HoldStatus, MovementKind, MovementPage, StockHoldView, StockMovementView } from '../../shared/types/catalogue';
 import { AppContext } from '../context';
+import { Quote } from '../entities/quote.entity';
 import { SpringRate } from '../entities/spring-rate.entity';
+import { StockHold } from '../entities/stock-hold.entity';
 import { StockMovement } from '../entities/stock-movement.entity';
 import { User } from '../entities/user.entity';
 import { ConflictError, NotFoundError } from '../errors';
@@ -20,7 +25,29 @@ export interface MovementRequest {
   /** Who did it; null only for stock the system records itself. */
   userId: number | null;
   reason: string;
-  quoteId?: number | null;
+}
+
+/** Who a new hold is for: a quote (only its acceptance makes one) or a name given at the counter. */
+export type HolderInput = { kind: 'quote'; quoteId: number } | { kind: 'manual'; name: string };
+
+export interface HoldRequest extends MovementRequest {
+  holder: HolderInput;
+}
+
+/** Names the hold a release takes from; all it holds unless a quantity is given. */
+export interface ReleaseRequest {
+  springId: number;
+  holdId: number;
+  quantity?: number;
+  userId: number | null;
+  reason: string;
+}
+
+/** What a quote's flow does to all it holds: who and why, for the movements. */
+export interface QuoteHoldsRequest {
+  quoteId: number;
+  userId: number | null;
+  reason: string;
 }
 
 export interface CountRequest {
@@ -32,13 +59,23 @@ export interface CountRequest {
 }
 
 export interface FitRequest extends MovementRequest {
-  /** Consume units reserved before (the quote's, the default), or take them from what is available. */
-  fromReserved?: boolean;
+  /** The counter's hold the units come from; without one they come from what is available. */
+  holdId?: number;
 }
 
 export interface MovementResult {
   spring: SpringRate;
   movement: StockMovement;
+  /** The hold the movement moved, as it now stands. */
+  hold?: StockHold;
+}
+
+/** A movement's who, why and what for. */
+interface MovementMeta {
+  userId: number | null;
+  reason: string;
+  quoteId?: number | null;
+  holdId?: number | null;
 }
 
 /** A count correction worked out in bulk (the CSV import): the spring's on-hand from `from` to `to`. */
@@ -106,7 +143,7 @@ export class StockService {
     return this.apply(manager, request.springId, 'correction', request, (spring) => {
       if (request.counted < spring.reserved) {
         throw new ConflictError(
-          `${spring.reserved} of ${spring.sku} are reserved for quotes, more than the ${request.counted} counted: release those reservations first, or count again.`,
+          `${spring.reserved} of ${spring.sku} are held, more than the ${request.counted} counted: release holds first, or count again.`,
           'below-reserved',
         );
       }
@@ -114,45 +151,85 @@ export class StockService {
     });
   }
 
-  reserve(manager: EntityManager, request: MovementRequest): Promise<MovementResult> {
-    return this.apply(manager, request.springId, 'reserve', request, (spring) => {
-      if (!spring.active) throw new ConflictError(`${spring.sku} is no longer in the catalogue; choose another spring.`, 'inactive');
-      const available = spring.onHand - spring.reserved;
-      if (request.quantity > available) {
-        throw new ConflictError(
-          `Only ${available} of ${spring.sku} available (${describe(spring)}): ${request.quantity} cannot be reserved.`,
-          'out-of-stock',
-        );
-      }
-      return { onHand: 0, reserved: request.quantity };
-    });
+  /** Holds units for a quote or a name: a hold row and the reserve movement that names it. */
+  async reserve(manager: EntityManager, request: HoldRequest): Promise<MovementResult & { hold: StockHold }> {
+    const spring = await this.load(manager, request.springId);
+    if (!spring.active) throw new ConflictError(`${spring.sku} is no longer in the catalogue; choose another spring.`, 'inactive');
+    const available = spring.onHand - spring.reserved;
+    if (request.quantity > available) {
+      throw new ConflictError(`Only ${available} of ${spring.sku} available (${describe(spring)}): ${request.quantity} cannot be reserved.`, 'out-of-stock');
+    }
+    const { holder } = request;
+    const hold = await manager.save(
+      manager.create(StockHold, {
+        springId: spring.id,
+        kind: holder.kind,
+        quoteId: holder.kind === 'quote' ? holder.quoteId : null,
+        name: holder.kind === 'manual' ? holder.name : null,
+        reason: request.reason,
+        heldQuantity: request.quantity,
+        quantity: request.quantity,
+        status: 'open',
+        createdById: request.userId,
+        createdAt: this.ctx.now(),
+        closedById: null,
+        closedAt: null,
+      }),
+    );
+    const moved = await this.write(manager, spring, 'reserve', { onHand: 0, reserved: request.quantity }, { ...request, quoteId: hold.quoteId, holdId: hold.id });
+    return { ...moved, hold };
   }
 
-  release(manager: EntityManager, request: MovementRequest): Promise<MovementResult> {
-    return this.apply(manager, request.springId, 'release', request, (spring) => {
-      if (request.quantity > spring.reserved) {
-        throw new ConflictError(`Only ${spring.reserved} of ${spring.sku} are reserved: ${request.quantity} cannot be released.`, 'not-reserved');
-      }
-      return { onHand: 0, reserved: -request.quantity };
-    });
+  /** Releases a hold made at the counter; a quote's hold goes only with its quote, or by `overrideQuoteHold`. */
+  async release(manager: EntityManager, request: ReleaseRequest): Promise<MovementResult> {
+    const hold = await this.openHold(manager, request.springId, request.holdId);
+    if (hold.kind === 'quote') throw await heldByQuote(manager, hold);
+    return this.releaseHold(manager, hold, request.quantity ?? hold.quantity, request);
   }
 
-  /** Springs leave the shop on a bike. */
-  fit(manager: EntityManager, request: FitRequest): Promise<MovementResult> {
-    const fromReserved = request.fromReserved ?? true;
-    return this.apply(manager, request.springId, 'fit', request, (spring) => {
-      if (fromReserved && request.quantity > spring.reserved) {
-        throw new ConflictError(
-          `Only ${spring.reserved} of ${spring.sku} are reserved: reserve them before fitting ${request.quantity}, or fit from what is available.`,
-          'not-reserved',
-        );
-      }
-      const available = spring.onHand - spring.reserved;
-      if (!fromReserved && request.quantity > available) {
-        throw new ConflictError(`Only ${available} of ${spring.sku} available (${describe(spring)}): ${request.quantity} cannot be fitted.`, 'out-of-stock');
-      }
-      return { onHand: -request.quantity, reserved: fromReserved ? -request.quantity : 0 };
-    });
+  /**
+   * The counter's override: releases all a quote's hold on this spring. The caller moves the quote
+   * (QuotesService.releaseOverQuote), in the same transaction.
+   */
+  async overrideQuoteHold(manager: EntityManager, request: Omit<ReleaseRequest, 'quantity'>): Promise<MovementResult & { hold: StockHold }> {
+    const hold = await this.openHold(manager, request.springId, request.holdId);
+    if (hold.kind !== 'quote') {
+      throw new ConflictError(`Hold #${hold.id} was made at the counter, for ${hold.name}: release it as usual.`, 'not-a-quote-hold');
+    }
+    const released = await this.releaseHold(manager, hold, hold.quantity, request);
+    return { ...released, hold: released.hold! };
+  }
+
+  /** Releases everything a quote holds (its cancel or expiry). */
+  async releaseQuoteHolds(manager: EntityManager, request: QuoteHoldsRequest): Promise<void> {
+    for (const hold of await this.quoteHolds(manager, request.quoteId)) await this.releaseHold(manager, hold, hold.quantity, request);
+  }
+
+  /** Springs leave the shop on a bike: from a hold made at the counter, or from what is available. */
+  async fit(manager: EntityManager, request: FitRequest): Promise<MovementResult> {
+    if (request.holdId === undefined) {
+      return this.apply(manager, request.springId, 'fit', request, (spring) => {
+        const available = spring.onHand - spring.reserved;
+        if (request.quantity > available) {
+          throw new ConflictError(`Only ${available} of ${spring.sku} available (${describe(spring)}): ${request.quantity} cannot be fitted.`, 'out-of-stock');
+        }
+        return { onHand: -request.quantity, reserved: 0 };
+      });
+    }
+    const hold = await this.openHold(manager, request.springId, request.holdId);
+    if (hold.kind === 'quote') throw await heldByQuote(manager, hold);
+    return this.fitFromHold(manager, hold, request.quantity, request);
+  }
+
+  /** Fits everything a quote holds (the quote marked fitted). */
+  async fitQuoteHolds(manager: EntityManager, request: QuoteHoldsRequest): Promise<void> {
+    for (const hold of await this.quoteHolds(manager, request.quoteId)) await this.fitFromHold(manager, hold, hold.quantity, request);
+  }
+
+  /** A spring's open holds, oldest first, with who holds them. */
+  async holdsOf(manager: EntityManager, springId: number): Promise<StockHoldView[]> {
+    await this.load(manager, springId);
+    return toHoldViews(manager, await manager.find(StockHold, { where: { springId, status: 'open' }, order: { id: 'ASC' } }));
   }
 
   /**
@@ -223,16 +300,65 @@ export class StockService {
     return query;
   }
 
+  private quoteHolds(manager: EntityManager, quoteId: number): Promise<StockHold[]> {
+    return manager.find(StockHold, { where: { quoteId, status: 'open' }, order: { id: 'ASC' } });
+  }
+
+  private async load(manager: EntityManager, springId: number): Promise<SpringRate> {
+    const spring = await manager.findOneBy(SpringRate, { id: springId });
+    if (!spring) throw new NotFoundError('There is no such spring in the catalogue.');
+    return spring;
+  }
+
+  /** A hold of this spring that still holds something; one of another spring is not found here. */
+  private async openHold(manager: EntityManager, springId: number, holdId: number): Promise<StockHold> {
+    const hold = await manager.findOneBy(StockHold, { id: holdId, springId });
+    if (!hold) throw new NotFoundError('This spring has no such hold.');
+    if (hold.status !== 'open') throw new ConflictError(`Hold #${hold.id} holds nothing any more: it was ${hold.status}.`, 'hold-closed');
+    return hold;
+  }
+
+  private async releaseHold(manager: EntityManager, hold: StockHold, quantity: number, meta: MovementMeta): Promise<MovementResult> {
+    if (quantity > hold.quantity) {
+      throw new ConflictError(`Hold #${hold.id} holds only ${hold.quantity}: ${quantity} cannot be released.`, 'not-reserved');
+    }
+    const spring = await this.load(manager, hold.springId);
+    const moved = await this.write(manager, spring, 'release', { onHand: 0, reserved: -quantity }, { ...meta, quoteId: hold.quoteId, holdId: hold.id });
+    return { ...moved, hold: await this.takeFromHold(manager, hold, quantity, 'released', meta.userId) };
+  }
+
+  private async fitFromHold(manager: EntityManager, hold: StockHold, quantity: number, meta: MovementMeta): Promise<MovementResult> {
+    if (quantity > hold.quantity) {
+      throw new ConflictError(`Hold #${hold.id} holds only ${hold.quantity}: fit ${hold.quantity} from it, or the rest from what is available.`, 'not-reserved');
+    }
+    const spring = await this.load(manager, hold.springId);
+    const moved = await this.write(manager, spring, 'fit', { onHand: -quantity, reserved: -quantity }, { ...meta, quoteId: hold.quoteId, holdId: hold.id });
+    return { ...moved, hold: await this.takeFromHold(manager, hold, quantity, 'fitted', meta.userId) };
+  }
+
+  /** Takes units off a hold, closing it as `closeAs` when none are left; guarded like the spring's update. */
+  private async takeFromHold(manager: EntityManager, hold: StockHold, quantity: number, closeAs: Exclude<HoldStatus, 'open'>, userId: number | null): Promise<StockHold> {
+    const left = hold.quantity - quantity;
+    const closing = left === 0;
+    const after = { quantity: left, status: closing ? closeAs : 'open', closedAt: closing ? this.ctx.now() : null, closedById: closing ? userId : null } as const;
+    const changed = await manager.update(StockHold, { id: hold.id, quantity: hold.quantity, status: 'open' }, after);
+    if (changed.affected !== 1) throw new ConflictError(`Hold #${hold.id} changed meanwhile; try again.`, 'stock-changed');
+    return Object.assign(hold, after);
+  }
+
   private async apply(
     manager: EntityManager,
     springId: number,
     kind: MovementKind,
-    request: { userId: number | null; reason: string; quoteId?: number | null },
+    meta: MovementMeta,
     deltasFor: (spring: SpringRate) => { onHand: number; reserved: number },
   ): Promise<MovementResult> {
-    const spring = await manager.findOneBy(SpringRate, { id: springId });
-    if (!spring) throw new NotFoundError('There is no such spring in the catalogue.');
-    const delta = deltasFor(spring);
+    const spring = await this.load(manager, springId);
+    return this.write(manager, spring, kind, deltasFor(spring), meta);
+  }
+
+  /** Changes the spring by `delta` and writes the movement that says so. */
+  private async write(manager: EntityManager, spring: SpringRate, kind: MovementKind, delta: { onHand: number; reserved: number }, meta: MovementMeta): Promise<MovementResult> {
     const after = { onHand: spring.onHand + delta.onHand, reserved: spring.reserved + delta.reserved };
     if (after.onHand < 0 || after.reserved < 0 || after.reserved > after.onHand) {
       throw new ConflictError(`That would leave ${spring.sku} with ${after.onHand} on hand and ${after.reserved} reserved.`, 'stock-conflict');
@@ -248,16 +374,52 @@ export class StockService {
         reservedDelta: delta.reserved,
         onHandAfter: after.onHand,
         reservedAfter: after.reserved,
-        userId: request.userId,
+        userId: meta.userId,
         at: this.ctx.now(),
-        reason: request.reason,
-        quoteId: request.quoteId ?? null,
+        reason: meta.reason,
+        quoteId: meta.quoteId ?? null,
         importBatchId: null,
+        holdId: meta.holdId ?? null,
       }),
     );
     this.ctx.sizingData.invalidate();
     return { spring: { ...spring, ...after }, movement };
   }
+}
+
+/** The refusal for a quote's hold taken at the counter: it names the quote and the way that is open. */
+async function heldByQuote(manager: EntityManager, hold: StockHold): Promise<ConflictError> {
+  const quote = await manager.findOneByOrFail(Quote, { id: hold.quoteId! });
+  return new ConflictError(
+    `Hold #${hold.id} is quote ${quote.number} v${quote.version}'s (${quote.status}): it goes when the quote is cancelled, expires or is fitted. ` +
+      'To take the springs all the same, release them over the quote: the desk and the customer will see that the quote lost its springs.',
+    'held-by-quote',
+  );
+}
+
+export async function toHoldViews(manager: EntityManager, holds: StockHold[]): Promise<StockHoldView[]> {
+  const quoteIds = [...new Set(holds.map((h) => h.quoteId).filter((id): id is number => id !== null))];
+  const quotes = quoteIds.length ? await manager.find(Quote, { select: { id: true, number: true, version: true, status: true, riderId: true }, where: { id: In(quoteIds) } }) : [];
+  const userIds = [...new Set([...holds.map((h) => h.createdById), ...quotes.map((q) => q.riderId)].filter((id): id is number => id !== null))];
+  const users = userIds.length ? await manager.find(User, { select: { id: true, name: true }, where: { id: In(userIds) } }) : [];
+  const quoteById = new Map(quotes.map((q) => [q.id, q]));
+  const userById = new Map(users.map((u) => [u.id, { id: u.id, name: u.name }]));
+  return holds.map((hold) => {
+    const quote = hold.quoteId === null ? undefined : quoteById.get(hold.quoteId);
+    return {
+      id: hold.id,
+      springId: hold.springId,
+      holder: quote
+        ? { kind: 'quote', quoteId: quote.id, number: quote.number, version: quote.version, status: quote.status, riderName: userById.get(quote.riderId)?.name ?? '' }
+        : { kind: 'manual', name: hold.name ?? '' },
+      quantity: hold.quantity,
+      heldQuantity: hold.heldQuantity,
+      status: hold.status,
+      reason: hold.reason,
+      createdAt: hold.createdAt.toISOString(),
+      createdBy: hold.createdById === null ? null : (userById.get(hold.createdById) ?? null),
+    };
+  });
 }
 
 export async function toMovementViews(manager: EntityManager, rows: StockMovement[]): Promise<StockMovementView[]> {
@@ -283,5 +445,6 @@ export async function toMovementViews(manager: EntityManager, rows: StockMovemen
     reason: row.reason,
     quoteId: row.quoteId,
     importBatchId: row.importBatchId,
+    holdId: row.holdId,
   }));
 }

@@ -239,19 +239,44 @@ const reasonField = string()
     return problem ? this.createError({ message: problem }) : true;
   });
 
-const quoteIdField = number().typeError('The quote must be a quote number.').integer().min(1).nullable().default(null);
+const holdIdField = number().typeError('Choose the hold: its number.').integer('Choose the hold: its number.').min(1, 'Choose the hold: its number.');
+
+/** Who or what a hold made at the counter is for, as the counter will read it in the list of holds. */
+const holdNameField = string()
+  .typeError('The name must be text.')
+  .trim()
+  .max(100, 'Keep the name to 100 characters.')
+  .required('Say who or what the springs are held for: a name, a job, a bike.')
+  .test('plain', function (value) {
+    const problem = value ? checkPlainText('The name', value) : undefined;
+    return problem ? this.createError({ message: problem }) : true;
+  });
 
 export const receiveSchema = object({ quantity: quantityField('Quantity', 1), reason: reasonField });
 
 export const countSchema = object({ counted: quantityField('The counted quantity', 0), reason: reasonField });
 
-export const reserveSchema = object({ quantity: quantityField('Quantity', 1), reason: reasonField, quoteId: quoteIdField });
+/** A named hold made at the counter; a quote's holds are made only by its acceptance. */
+export const reserveSchema = object({ quantity: quantityField('Quantity', 1), name: holdNameField, reason: reasonField });
 
-export const releaseSchema = reserveSchema;
+/** Releases one hold made at the counter, all of what it holds unless a quantity is given. */
+export const releaseSchema = object({
+  holdId: holdIdField.required('Choose the hold to release: a release names what it releases.'),
+  quantity: quantityField('Quantity', 1).optional(),
+  reason: reasonField,
+});
 
-export const fitSchema = reserveSchema.shape({
-  /** Fit units reserved before (a quote's), or take them straight from what is available. */
-  fromReserved: boolean().typeError('fromReserved must be true or false.').default(true),
+/** The counter's override: takes back a quote's hold, and the quote moves to springs-released. */
+export const overrideReleaseSchema = object({
+  holdId: holdIdField.required("Choose the quote's hold to release."),
+  reason: reasonField,
+});
+
+export const fitSchema = object({
+  quantity: quantityField('Quantity', 1),
+  reason: reasonField,
+  /** The counter's hold the units come from; without one they come from what is available. */
+  holdId: holdIdField.optional(),
 });
 
 const unitField = mixed<RateUnit>().oneOf(RATE_UNITS, 'Unit must be N/mm, kgf/mm or lbf/in.').default('N/mm');
@@ -370,6 +395,8 @@ export type SpringUpdateInput = InferType<typeof springUpdateSchema>;
 export type ReceiveInput = InferType<typeof receiveSchema>;
 export type CountInput = InferType<typeof countSchema>;
 export type ReserveInput = InferType<typeof reserveSchema>;
+export type ReleaseInput = InferType<typeof releaseSchema>;
+export type OverrideReleaseInput = InferType<typeof overrideReleaseSchema>;
 export type FitInput = InferType<typeof fitSchema>;
 export type SpringListInput = InferType<typeof springListSchema>;
 export type RatesForFitInput = InferType<typeof ratesForFitSchema>;

@@ -1,4 +1,4 @@
-/** The admin's shop settings for quotes (PUT /api/shop-settings): labour, tax, deposit, operations, validity. */
+/** The admin's shop settings (PUT /api/shop-settings): labour, tax, deposit, operations, validity for quotes; the public address. */
 import { array, mixed, number, object, string, type InferType } from 'yup';
 
 const wholeCents = (label: string, max: number) =>
@@ -46,6 +46,35 @@ export const depositRuleSchema = object({
   }),
 });
 
+const MAX_PUBLIC_URL_LENGTH = 200;
+
+/**
+ * What is wrong with a public address, or undefined when it is one: http(s), a host and maybe a
+ * port, nothing after them but one optional `/`. Checked by hand rather than with URL, which
+ * accepts and rewrites far more (and differs between the browser and the server).
+ */
+function publicUrlProblem(value: string): string | undefined {
+  const scheme = /^https?:\/\//i.exec(value);
+  if (!scheme) return 'Start the address with http:// or https://, like https://shop.example.';
+  const rest = value.slice(scheme[0].length);
+  const authority = /^[^/?#]*/.exec(rest)![0];
+  if (rest.length > authority.length && rest !== `${authority}/`) return 'Give only the address: no path, ? or # after the host and port.';
+  if (authority.includes('@')) return 'Leave out a user name and password.';
+  const hostAndPort = /^([a-z0-9](?:[a-z0-9-]*[a-z0-9])?(?:\.[a-z0-9](?:[a-z0-9-]*[a-z0-9])?)*|\[[0-9a-f:.]+\])(?::(\d*))?$/i.exec(authority);
+  if (!hostAndPort) return 'This is not a web address: type it as the browser shows it, like https://shop.example or http://192.168.1.20:8080.';
+  const port = hostAndPort[2];
+  if (port !== undefined && !(/^\d{1,5}$/.test(port) && Number(port) >= 1 && Number(port) <= 65535)) return 'The port is a whole number from 1 to 65535.';
+  return undefined;
+}
+
+/** The address as a browser writes an origin (RFC 6454 §6.2): lower case, no default port, no trailing `/`. */
+function normalisePublicUrl(value: string): string {
+  return value
+    .toLowerCase()
+    .replace(/\/$/, '')
+    .replace(/^(http:\/\/[^/]+):80$|^(https:\/\/[^/]+):443$/, '$1$2');
+}
+
 export const shopSettingsSchema = object({
   labourRateCentsPerHour: wholeCents('The labour rate', MAX_LABOUR_RATE_CENTS).min(1, 'The labour rate must be above 0.'),
   taxBasisPoints: number()
@@ -67,6 +96,16 @@ export const shopSettingsSchema = object({
     .min(1, 'A quote is valid for at least 1 day.')
     .max(365, 'A quote is valid for at most 365 days.'),
   cautions: string().trim().max(4000, 'At most 4000 characters.').default(''),
+  /** Empty or null: not set. */
+  publicUrl: string()
+    .trim()
+    .nullable()
+    .transform((value: unknown) => (typeof value === 'string' && value ? normalisePublicUrl(value) : value))
+    .max(MAX_PUBLIC_URL_LENGTH, `At most ${MAX_PUBLIC_URL_LENGTH} characters.`)
+    .test('public-url', (value, context) => {
+      const problem = value ? publicUrlProblem(value) : undefined;
+      return problem ? context.createError({ message: problem }) : true;
+    }),
 });
 
 export type ShopSettingsInput = InferType<typeof shopSettingsSchema>;

@@ -6,6 +6,7 @@
  */
 import type { SpringMaterial } from '../sizing/helical-spring';
 import type { RateUnit } from '../units';
+import type { QuoteStatus } from './quote';
 
 export const SPRING_KINDS = ['fork', 'shock'] as const;
 export type SpringKind = (typeof SPRING_KINDS)[number];
@@ -84,6 +85,8 @@ export interface StockMovementView {
   reason: string;
   quoteId: number | null;
   importBatchId: number | null;
+  /** The hold a reserve, release or fit moved. */
+  holdId: number | null;
 }
 
 export interface MovementPage {
@@ -100,10 +103,44 @@ export interface SpringAnswer {
   movements?: MovementPage;
 }
 
+/**
+ * Who holds reserved units: a quote (from its acceptance until it is cancelled, expires or is
+ * fitted) or a hold made by name at the counter. A spring's `reserved` is the sum of its open holds.
+ */
+export const HOLD_STATUSES = ['open', 'released', 'fitted'] as const;
+export type HoldStatus = (typeof HOLD_STATUSES)[number];
+
+export type HoldHolder =
+  | { kind: 'manual'; name: string }
+  | { kind: 'quote'; quoteId: number; number: string; version: number; status: QuoteStatus; riderName: string };
+
+export interface StockHoldView {
+  id: number;
+  springId: number;
+  holder: HoldHolder;
+  /** Units still held. */
+  quantity: number;
+  /** Units held when it was made. */
+  heldQuantity: number;
+  status: HoldStatus;
+  reason: string;
+  /** ISO 8601. */
+  createdAt: string;
+  /** Null for holds the system made (carried over from before holds were recorded). */
+  createdBy: MovementUser | null;
+}
+
+/** GET /stock/:id/holds: the spring's open holds, oldest first. */
+export interface StockHoldList {
+  holds: StockHoldView[];
+}
+
 /** The answer of every stock route: the spring as it now stands and the row just written (a count that matched writes a row of 0). */
 export interface StockAnswer {
   spring: SpringView;
   movement: StockMovementView;
+  /** The hold a reserve, release or fit moved, as it now stands. */
+  hold?: StockHoldView;
 }
 
 export interface FamilySummary {

@@ -1,7 +1,11 @@
 /** The service desk's quotes as the API answers them. Every amount is integer cents of `currency`. */
 import type { EndKind } from './sizing';
 
-export const QUOTE_STATUSES = ['draft', 'sent', 'accepted', 'declined', 'deposit-paid', 'booked', 'fitted', 'cancelled', 'expired', 'superseded'] as const;
+/**
+ * `springs-released`: the parts counter took back a spring the quote held (an audited override);
+ * the quote can no longer be fitted and is cancelled, with its deposit refunded.
+ */
+export const QUOTE_STATUSES = ['draft', 'sent', 'accepted', 'declined', 'deposit-paid', 'booked', 'springs-released', 'fitted', 'cancelled', 'expired', 'superseded'] as const;
 
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
 
@@ -18,6 +22,8 @@ export interface ShopSettingsView {
   operations: LabourOperation[];
   quoteValidityDays: number;
   cautions: string;
+  /** Where riders reach the web app, for links in mails; null: SAGWRIGHT_PUBLIC_URL or the address the server listens on. */
+  publicUrl: string | null;
   updatedAt: string;
 }
 

@@ -39,6 +39,8 @@ export const riderKeys = {
 export const counterKeys = {
   springs: (query: string) => `/catalogue/springs?${query}`,
   spring: (id: number, query: string) => `/catalogue/springs/${id}?${query}`,
+  /** Who holds a spring's reserved units. */
+  holds: (id: number) => `/stock/${id}/holds`,
   /** Every list page and every detail: what a stock change or an import makes stale. */
   isCatalogue: (key: unknown) => typeof key === 'string' && key.startsWith('/catalogue/'),
   families: '/catalogue/families',

@@ -1,8 +1,10 @@
 /**
  * The parts counter in a real browser: the demo clerk searches the catalogue by rate range,
- * receives stock on one spring, and imports a CSV through the file picker (a bad row first, then
- * the fixed file), after which the new spring is in the catalogue; it also adds a spring by hand
- * and reads the stock ledger filtered to it. Phone and wide screenshots;
+ * receives stock on one spring, holds two of it by name and releases one of them by the hold's
+ * number (the ledger names the hold), and imports a CSV through the file picker (a bad row first,
+ * then the fixed file), after which the new spring is in the catalogue; it also adds a spring by
+ * hand and reads the stock ledger filtered to it. A quote's hold taken over the quote is
+ * desk-flows.test.ts's. Phone and wide screenshots;
  * nothing may log an error, so the flow makes no request the server would refuse.
  */
 import fs from 'node:fs';
@@ -71,6 +73,26 @@ test('the clerk searches by rate, receives stock and imports a CSV (wide)', asyn
   expect(Number(await page.getByTestId('fact-On hand').innerText())).toBe(before + 3);
   await page.getByText('Delivery note 4711').first().waitFor();
   await screenshot(page, 'counter-spring-wide');
+
+  const reserved = Number(await page.getByTestId('fact-Reserved').innerText());
+  await page.getByRole('button', { name: 'Hold springs' }).click();
+  await page.getByLabel('Quantity to hold').fill('2');
+  await page.getByLabel('Held for').fill('Race team, bike 7');
+  await page.getByLabel('Reason', { exact: true }).fill('Promised by phone');
+  await page.getByRole('button', { name: 'Hold', exact: true }).click();
+  const made = page.getByRole('status').getByText(new RegExp(`^Made hold #\\d+: reserved is now ${reserved + 2}\\.$`));
+  await made.waitFor();
+  const holdId = /#(\d+)/.exec(await made.innerText())![1];
+  const held = page.getByTestId(`hold-${holdId}`);
+  await held.getByText(`#${holdId} · Held for Race team, bike 7 · 2 held`).waitFor();
+  await held.getByRole('button', { name: `Release #${holdId}…` }).click();
+  await held.getByLabel('Quantity to release').fill('1');
+  await held.getByLabel('Reason for the release').fill('One collected');
+  await held.getByRole('button', { name: `Release hold #${holdId}` }).click();
+  await page.getByRole('status').getByText(`Released from hold #${holdId}: reserved is now ${reserved + 1}.`).waitFor();
+  await held.getByText(`#${holdId} · Held for Race team, bike 7 · 1 held`).waitFor();
+  await page.getByRole('list', { name: 'Stock history' }).getByText(new RegExp(`One collected · hold #${holdId}$`)).waitFor();
+  await screenshot(page, 'counter-spring-holds-wide');
 
   await page.goto(`${live.server.url}/counter/import`);
   await page.getByRole('heading', { name: 'Import a CSV', level: 1 }).waitFor();

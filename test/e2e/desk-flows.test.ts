@@ -6,6 +6,8 @@
  *   with the day and time picker, the customer sees the booking on the quote page, the desk marks
  *   it fitted (balance due shown) and the customer finds the spring swap in the setup log;
  * - a paid quote cancelled at the desk shows the refund;
+ * - the counter releases a paid quote's spring over the quote on the spring's page; the desk and
+ *   the customer's page show the quote as "Springs released", and the desk's cancel refunds it;
  * - the desk screens at phone size (390x844) and wide (1280x800), with screenshots.
  * Chromium logs every 4xx as a console error and a test fails on any, so nothing here asks for
  * what the server refuses: a declined card is tested over HTTP in test/server, not here.
@@ -32,6 +34,7 @@ const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 const rider = account('rider');
 const desk = account('desk');
 const admin = account('admin');
+const counter = account('counter');
 
 const READINGS = {
   front: { extended: '560', static: ['532', '540'], rider: ['512', '520'] },
@@ -268,6 +271,52 @@ test('a paid quote cancelled at the desk shows the deposit refunded', async () =
   await screenshot(phone.page, 'desk-quote-cancelled-phone');
   expect(phone.errors).toEqual([]);
   await phone.context.close();
+});
+
+test("the counter takes a paid quote's spring over the quote; the desk and the customer see it, and the cancel refunds the deposit", async () => {
+  const { riderToken, bikeId } = await riderBike('Override bike');
+  const deskToken = await signInApi(desk.email);
+  const draft = await draftWithStockedSpring(deskToken, riderToken, bikeId);
+  const known = await quoteLinks();
+  await call('POST', `/quotes/${draft.id}/send`, deskToken);
+  const link = await nextQuoteLink(known);
+  const token = link.split('/').at(-1)!;
+  await call('POST', `/customer-quotes/${token}/accept`, undefined, {});
+  const paid = await call<{ quote: QuoteView }>('POST', `/customer-quotes/${token}/pay-deposit`, undefined, { paymentMethod: 'pm_card_visa' });
+  expect(paid.quote.status).toBe('deposit-paid');
+  const springId = draft.lines.find((line) => line.kind === 'spring')!.springId!;
+
+  const clerk = await signedIn('wide', counter.email, '/counter');
+  await clerk.page.goto(`${live.server.url}/counter/springs/${springId}`);
+  const hold = clerk.page.locator('[data-testid^="hold-"]:visible').filter({ hasText: `Quote ${draft.number}` });
+  await hold.getByText(/Deposit paid · 1 held$/).waitFor();
+  await hold.getByRole('button', { name: /over the quote…$/ }).click();
+  await hold.getByLabel('Why the quote cannot keep them').fill('Needed for a walk-in');
+  await screenshot(clerk.page, 'counter-release-over-quote-wide');
+  await hold.getByRole('button', { name: 'Release over the quote' }).click();
+  await clerk.page.getByRole('status').getByText(/^Released from hold #\d+: reserved is now \d+\.$/).waitFor();
+  expect(await hold.count()).toBe(0);
+
+  const phone = await signedIn('phone', desk.email, '/desk');
+  await phone.page.goto(`${live.server.url}/desk/quotes/${draft.id}`);
+  await visible(phone.page, 'quote-status').getByText('Springs released').waitFor();
+  await visible(phone.page, 'springs-released-note').getByText(/cannot be fitted as quoted\. Cancel it to refund the deposit of /).waitFor();
+  await visible(phone.page, 'quote-history').getByText(/Needed for a walk-in/).waitFor();
+  expect(await phone.page.getByRole('button', { name: 'Mark as fitted' }).count()).toBe(0);
+  await screenshot(phone.page, 'desk-quote-springs-released-phone');
+
+  const customer = await openPage(live.browser, 'phone');
+  await customer.page.goto(`${live.server.url}${link}`);
+  await visible(customer.page, 'quote-status').getByText('Springs released').waitFor();
+  await visible(customer.page, 'springs-released').getByText(/is refunded in full when the quote is closed\.$/).waitFor();
+  await screenshot(customer.page, 'desk-customer-springs-released-phone');
+
+  await phone.page.getByRole('button', { name: 'Cancel the quote' }).click();
+  await visible(phone.page, 'quote-status').getByText('Cancelled').waitFor();
+  const after = await call<{ quote: QuoteView }>('GET', `/quotes/${draft.id}`, deskToken);
+  expect(after.quote.refundedCents).toBe(paid.quote.paidCents);
+  expect([...clerk.errors, ...phone.errors, ...customer.errors]).toEqual([]);
+  await Promise.all([clerk.context.close(), phone.context.close(), customer.context.close()]);
 });
 
 describe.each(['phone', 'wide'] as const)('the desk screens at %s size', (size) => {

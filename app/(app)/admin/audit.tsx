@@ -40,6 +40,8 @@ const TERMS: { [K in keyof Terms]: { label: string; show: (value: Terms[K]) => s
   operations: { label: 'Operations', show: (list) => list.map((o) => `${o.label} ${o.minutes} min`).join(', ') },
   quoteValidityDays: { label: 'Quotes valid for', show: (days) => `${days} days` },
   cautions: { label: 'Cautions', show: (text) => (text ? `"${text}"` : 'none') },
+  // Entries from before the address was a setting have no value: the same as not set.
+  publicUrl: { label: 'Public address', show: (url) => url ?? 'not set' },
 };
 
 /** What a shop-settings edit changed, one line per term: "Tax rate: 20 % → 21 %". */

@@ -41,7 +41,7 @@ export function MovementList({ movements, showSku = false, label = 'Stock histor
         >
           <ThemedText type="bodyStrong">{`${showSku ? `${movement.sku} · ` : ''}${KIND_LABELS[movement.kind]}: ${describeChange(movement)}`}</ThemedText>
           <ThemedText type="caption" color="textMuted">
-            {`${new Date(movement.at).toLocaleString()} · ${movement.user?.name ?? 'System'} · ${movement.reason}${movement.importBatchId ? ` · import #${movement.importBatchId}` : ''}`}
+            {`${new Date(movement.at).toLocaleString()} · ${movement.user?.name ?? 'System'} · ${movement.reason}${movement.holdId ? ` · hold #${movement.holdId}` : ''}${movement.importBatchId ? ` · import #${movement.importBatchId}` : ''}`}
           </ThemedText>
         </View>
       ))}

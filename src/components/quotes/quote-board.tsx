@@ -9,7 +9,7 @@ import type { QuoteStatus, QuoteSummary } from '@shared/types/quote';
 import { STATUS_LABELS, formatDateTime } from './quote-status';
 
 /** The statuses the desk still acts on, in the order work moves; closed ones follow. */
-export const BOARD_COLUMNS: readonly QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked', 'fitted'];
+export const BOARD_COLUMNS: readonly QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked', 'springs-released', 'fitted'];
 export const CLOSED_STATUSES: readonly QuoteStatus[] = ['declined', 'cancelled', 'expired', 'superseded'];
 
 export function groupByStatus(quotes: QuoteSummary[]): Map<QuoteStatus, QuoteSummary[]> {

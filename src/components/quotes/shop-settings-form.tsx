@@ -33,6 +33,7 @@ type ShopSettingsValues = {
   operations: OperationValues[];
   quoteValidityDays: string;
   cautions: string;
+  publicUrl: string;
 };
 
 /** The schema's (and the server's) field paths, as this form names them. */
@@ -58,6 +59,7 @@ function settingsToValues(settings: ShopSettingsView): ShopSettingsValues {
     operations: settings.operations.map((op) => ({ code: op.code, label: op.label, minutes: String(op.minutes) })),
     quoteValidityDays: String(settings.quoteValidityDays),
     cautions: settings.cautions,
+    publicUrl: settings.publicUrl ?? '',
   };
 }
 
@@ -81,6 +83,7 @@ function valuesToSettings(values: ShopSettingsValues): { settings: ShopSettingsI
     operations: values.operations.map((op) => ({ code: op.code, label: op.label, minutes: wholeNumber(op.minutes) })),
     quoteValidityDays: wholeNumber(values.quoteValidityDays),
     cautions: values.cautions,
+    publicUrl: values.publicUrl,
   };
   try {
     const settings = shopSettingsSchema.validateSync(candidate, { abortEarly: false, stripUnknown: true });
@@ -184,6 +187,14 @@ export function ShopSettingsForm({ settings, save }: { settings: ShopSettingsVie
         <OperationList />
         <TextField name="quoteValidityDays" label="Quotes are valid for (days)" inputMode="numeric" />
         <TextField name="cautions" label="Cautions printed on every quote" multiline />
+        <TextField
+          name="publicUrl"
+          label="Public web address"
+          hint="Where riders open Sagwright, like https://shop.example: links in reset and quote mails start with it (SAGWRIGHT_PUBLIC_URL on the server wins). Empty: the server's own address, and in production no such mail is sent."
+          inputMode="url"
+          autoCapitalize="none"
+          autoCorrect={false}
+        />
         <FormErrorBanner />
         <SubmitButton label="Save the shop settings" busyLabel="Saving…" />
       </View>

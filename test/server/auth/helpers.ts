@@ -17,6 +17,7 @@ export const RAISED_LIMITS: RateLimits = {
   signIn: { ...DEFAULT_RATE_LIMITS.signIn, limit: 1000 },
   signUp: { ...DEFAULT_RATE_LIMITS.signUp, limit: 1000 },
   reset: { ...DEFAULT_RATE_LIMITS.reset, limit: 1000 },
+  perAddress: { ...DEFAULT_RATE_LIMITS.perAddress, limit: 1000 },
 };
 
 let serial = 0;

@@ -40,7 +40,8 @@ test('the mailed link sets a new password once; the old password and old session
   const session = await signIn(t, rider.email).expect(200);
 
   const link = await requestReset(rider, 0, rider.email.toUpperCase());
-  expect(link.origin + link.pathname).toBe('http://localhost:8081/reset');
+  // The public address (here where the server listens), not the Origin the request names.
+  expect(link.origin + link.pathname).toBe(`http://localhost:${t.config.port}/reset`);
   expect((await waitForMail(t, admin, rider.email)).subject).toBe('Reset your Sagwright password');
 
   const token = link.searchParams.get('token')!;

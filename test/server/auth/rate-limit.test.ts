@@ -42,3 +42,24 @@ test('reset request and reset share one count per address', async () => {
   await request(t.app).post('/api/auth/reset-request').send({ email: 'a@example.test' }).expect(429);
   await request(t.app).post('/api/auth/reset').send({}).expect(429);
 });
+
+test('from one address sign-in, sign-up and reset share one cap whatever the e-mail; another address still gets through', async () => {
+  // A cap per address beside the one per address and e-mail: common practice, no source.
+  const perAddress = { limit: 20, windowMs: 15 * 60_000 };
+  const capped = await makeTestContext({ rateLimits: { ...DEFAULT_RATE_LIMITS, perAddress } });
+  try {
+    // As in the probe: parallel workers, each with a new e-mail, so the per-e-mail count never trips.
+    const answers = await Promise.all(Array.from({ length: 40 }, (_, i) => signIn(capped, `worker-${i}@example.test`, 'a guess')));
+    const statuses = answers.map((res) => res.status).sort();
+    expect(statuses).toEqual([...Array(perAddress.limit).fill(401), ...Array(40 - perAddress.limit).fill(429)]);
+    expect(answers.find((res) => res.status === 429)!.body.error.code).toBe('rate-limited');
+
+    await request(capped.app).post('/api/auth/sign-up').send({}).expect(429);
+    await request(capped.app).post('/api/auth/reset-request').send({ email: 'a@example.test' }).expect(429);
+    await request(capped.app).post('/api/auth/reset').send({}).expect(429);
+    // Behind the loopback proxy the client's own address counts (server/app.ts trusts loopback).
+    await signIn(capped, 'worker-0@example.test', 'a guess').set('X-Forwarded-For', '203.0.113.7').expect(401);
+  } finally {
+    await capped.dispose();
+  }
+});

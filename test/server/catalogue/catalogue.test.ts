@@ -117,10 +117,10 @@ describe('detail, create and update', () => {
 
   test('deactivating hides a spring from the desk and riders; not while units are reserved', async () => {
     const spring = await createSpring(t, {}, 2);
-    await request(t.app).post(`/api/stock/${spring.id}/reserve`).set('Authorization', tokens.desk).send({ quantity: 1, reason: 'Quote 7', quoteId: 7 }).expect(201);
+    const held = await request(t.app).post(`/api/stock/${spring.id}/reserve`).set('Authorization', tokens.desk).send({ quantity: 1, name: 'Job 7', reason: 'Promised' }).expect(201);
     const refused = await request(t.app).post(`/api/catalogue/springs/${spring.id}/deactivate`).set('Authorization', tokens.counter).expect(409);
     expect(refused.body.error.code).toBe('has-reservations');
-    await request(t.app).post(`/api/stock/${spring.id}/release`).set('Authorization', tokens.desk).send({ quantity: 1, reason: 'Quote 7 declined', quoteId: 7 }).expect(201);
+    await request(t.app).post(`/api/stock/${spring.id}/release`).set('Authorization', tokens.desk).send({ holdId: held.body.hold.id, reason: 'Job 7 declined' }).expect(201);
     await request(t.app).post(`/api/catalogue/springs/${spring.id}/deactivate`).set('Authorization', tokens.counter).expect(200);
     await get(`/catalogue/springs/${spring.id}`, 'rider').expect(404);
     expect((await get(`/catalogue/springs/${spring.id}`).expect(200)).body.spring.active).toBe(false);

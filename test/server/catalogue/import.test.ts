@@ -210,9 +210,9 @@ describe('export', () => {
     const spring = await createSpring(t, { sku: 'MOV-EXPORT' }, 2);
     const res = await request(t.app).get(`/api/stock/movements.csv?springId=${spring.id}`).set('Authorization', tokens.admin).expect(200);
     const lines = res.text.trim().split('\n');
-    expect(lines[0]).toBe('id,at,sku,kind,on_hand_delta,reserved_delta,on_hand_after,reserved_after,user,reason,quote_id,import_batch_id');
+    expect(lines[0]).toBe('id,at,sku,kind,on_hand_delta,reserved_delta,on_hand_after,reserved_after,user,reason,quote_id,import_batch_id,hold_id');
     expect(lines).toHaveLength(2);
-    expect(lines[1]).toMatch(/,MOV-EXPORT,receive,2,0,2,0,,Test delivery,,$/);
+    expect(lines[1]).toMatch(/,MOV-EXPORT,receive,2,0,2,0,,Test delivery,,,$/);
   });
 });
 

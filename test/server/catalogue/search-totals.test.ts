@@ -34,7 +34,7 @@ test('a stock movement changes the in-stock total at once', async () => {
   expect(await total(inStock)).toBe(0);
   await post(`/stock/${spring.id}/receive`, { quantity: 2, reason: 'Delivery 7' }).expect(201);
   expect(await total(inStock)).toBe(1);
-  await post(`/stock/${spring.id}/reserve`, { quantity: 2, reason: 'Quote 7', quoteId: 7 }).expect(201);
+  await post(`/stock/${spring.id}/reserve`, { quantity: 2, name: 'Job 7', reason: 'Promised' }).expect(201);
   expect(await total(inStock)).toBe(0);
 });
 

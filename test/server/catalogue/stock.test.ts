@@ -1,8 +1,8 @@
 /**
  * Stock movements against a real SQLite file: on hand and reserved always equal the sums of the
- * movements and never go negative (random sequences from fast-check), truly concurrent
- * reservations over separate sockets never oversell, and the sizing's in-stock pick follows a
- * receive or a reservation at once. Stock facts here are invented test data.
+ * movements, reserved the sum of the open holds, and neither goes negative (random sequences from
+ * fast-check), truly concurrent holds over separate sockets never oversell, and the sizing's
+ * in-stock pick follows a receive or a hold at once. Stock facts here are invented test data.
  */
 import { AddressInfo } from 'node:net';
 import { Server } from 'node:http';
@@ -10,6 +10,7 @@ import * as fc from 'fast-check';
 import request from 'supertest';
 import { IsNull } from 'typeorm';
 import { SpringRate } from '../../../server/entities/spring-rate.entity';
+import { StockHold } from '../../../server/entities/stock-hold.entity';
 import { StockMovement } from '../../../server/entities/stock-movement.entity';
 import { ConflictError } from '../../../server/errors';
 import { seed } from '../../../server/seed';
@@ -49,31 +50,38 @@ describe('each movement over HTTP', () => {
     );
     expect(Date.parse(received.body.movement.at)).not.toBeNaN();
     await post(path('count'), 'admin', { counted: 4, reason: 'Stock-take, one cracked' }).expect(201);
-    const reserved = await post(path('reserve'), 'desk', { quantity: 3, reason: 'Quote 12', quoteId: 12 }).expect(201);
+    const reserved = await post(path('reserve'), 'desk', { quantity: 3, name: 'Job 12', reason: 'Promised at the desk' }).expect(201);
     // The desk gets the summary: availability, no stock counts or supplier.
     expect(reserved.body.spring).toEqual(expect.objectContaining({ available: 1 }));
     expect(reserved.body.spring.onHand).toBeUndefined();
     expect(reserved.body.spring.supplier).toBeUndefined();
-    expect(reserved.body.movement).toEqual(expect.objectContaining({ kind: 'reserve', reservedDelta: 3, quoteId: 12 }));
-    await post(path('release'), 'desk', { quantity: 1, reason: 'Quote 12 changed to one spring', quoteId: 12 }).expect(201);
-    const fitted = await post(path('fit'), 'counter', { quantity: 2, reason: 'Fitted on job 12', quoteId: 12 }).expect(201);
+    const holdId = reserved.body.hold.id;
+    expect(reserved.body.movement).toEqual(expect.objectContaining({ kind: 'reserve', reservedDelta: 3, holdId, quoteId: null }));
+    await post(path('release'), 'desk', { holdId, quantity: 1, reason: 'Job 12 changed to one spring' }).expect(201);
+    const fitted = await post(path('fit'), 'counter', { holdId, quantity: 2, reason: 'Fitted on job 12' }).expect(201);
     expect(fitted.body.spring).toEqual(expect.objectContaining({ onHand: 2, reserved: 0 }));
+    expect(fitted.body.hold).toEqual(expect.objectContaining({ id: holdId, quantity: 0, heldQuantity: 3, status: 'fitted' }));
     const history = await request(t.app).get(`/api/stock/movements?springId=${spring.id}&pageSize=10`).set('Authorization', tokens.counter).expect(200);
-    expect(history.body.movements.map((m: { kind: string }) => m.kind)).toEqual(['fit', 'release', 'reserve', 'correction', 'receive']);
-    expect((await request(t.app).get('/api/stock/movements?quoteId=12').set('Authorization', tokens.admin).expect(200)).body.total).toBe(3);
+    expect(history.body.movements.map((m: { kind: string; holdId: number | null }) => [m.kind, m.holdId])).toEqual([
+      ['fit', holdId],
+      ['release', holdId],
+      ['reserve', holdId],
+      ['correction', null],
+      ['receive', null],
+    ]);
     expect(await ledgerMismatches(t)).toEqual([]);
   });
 
   test('refuses what would go negative or promise more than is there, with a 409 that says why', async () => {
     const spring = await createSpring(t, {}, 2);
     const path = (action: string) => `/stock/${spring.id}/${action}`;
-    await post(path('reserve'), 'desk', { quantity: 1, reason: 'Quote 30' }).expect(201);
-    const short = await post(path('reserve'), 'desk', { quantity: 2, reason: 'Quote 31' }).expect(409);
+    const { hold } = (await post(path('reserve'), 'desk', { quantity: 1, name: 'Job 30', reason: 'On the phone' }).expect(201)).body;
+    const short = await post(path('reserve'), 'desk', { quantity: 2, name: 'Job 31', reason: 'On the phone' }).expect(409);
     expect(short.body.error).toEqual({ code: 'out-of-stock', message: expect.stringMatching(/Only 1 of .* available \(2 on hand, 1 reserved\)/) });
-    expect((await post(path('release'), 'desk', { quantity: 2, reason: 'Too many' }).expect(409)).body.error.code).toBe('not-reserved');
+    expect((await post(path('release'), 'desk', { holdId: hold.id, quantity: 2, reason: 'Too many' }).expect(409)).body.error.code).toBe('not-reserved');
     expect((await post(path('count'), 'counter', { counted: 0, reason: 'Shelf empty?' }).expect(409)).body.error.code).toBe('below-reserved');
-    expect((await post(path('fit'), 'counter', { quantity: 2, reason: 'Two fitted' }).expect(409)).body.error.code).toBe('not-reserved');
-    expect((await post(path('fit'), 'counter', { quantity: 2, reason: 'Walk-in', fromReserved: false }).expect(409)).body.error.code).toBe('out-of-stock');
+    expect((await post(path('fit'), 'counter', { holdId: hold.id, quantity: 2, reason: 'Two fitted' }).expect(409)).body.error.code).toBe('not-reserved');
+    expect((await post(path('fit'), 'counter', { quantity: 2, reason: 'Walk-in' }).expect(409)).body.error.code).toBe('out-of-stock');
     const bad = await post(path('receive'), 'counter', { quantity: -4 }).expect(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['quantity', 'reason']);
     await post('/stock/999999/receive', 'counter', { quantity: 1, reason: 'Nowhere' }).expect(404);
@@ -90,45 +98,54 @@ describe('each movement over HTTP', () => {
 });
 
 describe('properties (fast-check)', () => {
-  type Op = { kind: 'receive' | 'count' | 'reserve' | 'release' | 'fit' | 'fit-direct'; quantity: number };
+  type Op = { kind: 'receive' | 'count' | 'reserve' | 'release' | 'fit' | 'fit-direct'; quantity: number; pick: number };
   const op: fc.Arbitrary<Op> = fc.record({
     kind: fc.constantFrom('receive', 'count', 'reserve', 'release', 'fit', 'fit-direct'),
     quantity: fc.integer({ min: 1, max: 6 }),
+    pick: fc.nat(),
   });
 
-  test('after any sequence of movements on hand and reserved equal their sums, and never go negative', async () => {
+  test('after any sequence of movements on hand and reserved equal their sums and the holds, and never go negative', async () => {
     const stock = new StockService(t);
     await fc.assert(
       fc.asyncProperty(fc.array(op, { minLength: 1, maxLength: 25 }), async (ops) => {
         const spring = await createSpring(t);
         // A model of what the books should say, refused moves leaving it as it was.
-        let model = { onHand: 0, reserved: 0 };
-        for (const { kind, quantity } of ops) {
+        let onHand = 0;
+        const holds = new Map<number, number>();
+        const reserved = () => [...holds.values()].reduce((a, b) => a + b, 0);
+        for (const { kind, quantity, pick } of ops) {
           const base = { springId: spring.id, quantity, userId: counterId, reason: `property ${kind}` };
-          const next =
-            kind === 'receive' ? { onHand: model.onHand + quantity, reserved: model.reserved }
-            : kind === 'count' ? { onHand: quantity, reserved: model.reserved }
-            : kind === 'reserve' ? { onHand: model.onHand, reserved: model.reserved + quantity }
-            : kind === 'release' ? { onHand: model.onHand, reserved: model.reserved - quantity }
-            : kind === 'fit' ? { onHand: model.onHand - quantity, reserved: model.reserved - quantity }
-            : { onHand: model.onHand - quantity, reserved: model.reserved };
-          const allowed = next.onHand >= 0 && next.reserved >= 0 && next.reserved <= next.onHand;
+          const open = [...holds.keys()];
+          const holdId = open[pick % Math.max(open.length, 1)];
+          if ((kind === 'release' || kind === 'fit') && holdId === undefined) continue;
+          const allowed =
+            kind === 'receive' ? true
+            : kind === 'count' ? quantity >= reserved()
+            : kind === 'reserve' || kind === 'fit-direct' ? quantity <= onHand - reserved()
+            : quantity <= holds.get(holdId)!;
           const run = writeCatalogue(t, (m) =>
             kind === 'receive' ? stock.receive(m, base)
             : kind === 'count' ? stock.correct(m, { ...base, counted: quantity })
-            : kind === 'reserve' ? stock.reserve(m, base)
-            : kind === 'release' ? stock.release(m, base)
-            : stock.fit(m, { ...base, fromReserved: kind === 'fit' }),
+            : kind === 'reserve' ? stock.reserve(m, { ...base, holder: { kind: 'manual', name: 'Property' } })
+            : kind === 'release' ? stock.release(m, { ...base, holdId })
+            : stock.fit(m, kind === 'fit' ? { ...base, holdId } : base),
           );
-          if (allowed) {
-            await run;
-            model = next;
-          } else {
+          if (!allowed) {
             await expect(run).rejects.toBeInstanceOf(ConflictError);
+            continue;
           }
+          const { hold } = await run;
+          if (kind === 'receive') onHand += quantity;
+          if (kind === 'count') onHand = quantity;
+          if (kind === 'fit' || kind === 'fit-direct') onHand -= quantity;
+          if (hold && hold.quantity > 0) holds.set(hold.id, hold.quantity);
+          else if (hold) holds.delete(hold.id);
         }
         const stored = await t.db.read.getRepository(SpringRate).findOneByOrFail({ id: spring.id });
-        expect({ onHand: stored.onHand, reserved: stored.reserved }).toEqual(model);
+        expect({ onHand: stored.onHand, reserved: stored.reserved }).toEqual({ onHand, reserved: reserved() });
+        const openHolds = await t.db.read.getRepository(StockHold).find({ where: { springId: spring.id, status: 'open' } });
+        expect(new Map(openHolds.map((h) => [h.id, h.quantity]))).toEqual(holds);
         expect(await ledgerMismatches(t)).toEqual([]);
       }),
       { numRuns: 30 },
@@ -160,7 +177,7 @@ describe('concurrent reservations over real sockets', () => {
         fetch(`${base}/api/stock/${spring.id}/reserve`, {
           method: 'POST',
           headers: { 'content-type': 'application/json', authorization: tokens.desk },
-          body: JSON.stringify({ quantity: 1, reason: `Quote ${1000 + i}`, quoteId: 1000 + i }),
+          body: JSON.stringify({ quantity: 1, name: `Walk-in ${1000 + i}`, reason: 'Held at the counter' }),
         }).then(async (res) => ({ status: res.status, body: await res.json() })),
       ),
     );
@@ -186,7 +203,7 @@ describe('the sizing follows the stock', () => {
     expect(first).toEqual(expect.objectContaining({ sku: expect.any(String), inStock: true }));
     const spring = await t.db.read.getRepository(SpringRate).findOneByOrFail({ sku: first.sku });
     const available = spring.onHand - spring.reserved;
-    await post(`/stock/${spring.id}/reserve`, 'desk', { quantity: available, reason: 'Quote 500' }).expect(201);
+    await post(`/stock/${spring.id}/reserve`, 'desk', { quantity: available, name: 'Job 500', reason: 'Held for a fitting' }).expect(201);
     const after = await inStockPick();
     expect(after?.sku).not.toBe(first.sku);
     await post(`/stock/${spring.id}/receive`, 'counter', { quantity: 4, reason: 'Delivery 501' }).expect(201);

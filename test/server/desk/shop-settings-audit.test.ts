@@ -99,7 +99,7 @@ describe('PUT /api/shop-settings over HTTP', () => {
     const at = Date.parse(first[0].at);
     expect(at).toBeGreaterThanOrEqual(sent);
     expect(at).toBeLessThanOrEqual(answered);
-    const terms = { ...TEST_SETTINGS };
+    const terms = { ...TEST_SETTINGS, publicUrl: null };
     expect(first[0]).toEqual({
       id: expect.any(Number),
       at: first[0].at,

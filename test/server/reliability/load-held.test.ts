@@ -53,7 +53,7 @@ test(`${CONNECTIONS} connections for ${SECONDS} s of mixed traffic: every reques
   for (let i = 0; i < 2; i++) quotes.push((await sentSpringQuote(base, desk, recordId, springs)).id);
 
   const json = (token: string) => ({ 'content-type': 'application/json', authorization: `Bearer ${token}` });
-  const hold = JSON.stringify({ quantity: 1, reason: 'Held for a walk-in' });
+  const hold = JSON.stringify({ quantity: 1, name: 'Walk-in', reason: 'Held for a walk-in' });
   const delivery = JSON.stringify({ quantity: 1, reason: 'Delivery of one' });
   const tally = new Map<string, Map<number, number>>();
   const counted = (kind: string, request: SequencedRequest): SequencedRequest => ({

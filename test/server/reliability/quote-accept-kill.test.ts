@@ -3,8 +3,8 @@
  * SAGWRIGHT_FAULT_PAUSE=quote-accept-written the acceptance's transaction prints a marker once it
  * has reserved every quoted spring and moved the quote to accepted, then never commits: the kill
  * falls between the two. After a restart the file passes SQLite's integrity check, the quote is
- * still sent with nothing reserved for it, the ledger holds, and accepting again reserves the
- * whole quote. All-or-nothing is SQLite's atomic commit (sqlite.org/atomiccommit.html).
+ * still sent with nothing reserved or held for it, the ledger holds, and accepting again reserves
+ * the whole quote. All-or-nothing is SQLite's atomic commit (sqlite.org/atomiccommit.html).
  */
 import fs from 'node:fs';
 import { RunningServer, startServer } from '../../e2e/server-process';
@@ -50,6 +50,7 @@ test('a kill between reserving the springs and the commit leaves the quote sent 
   expect(await stockOf(ids)).toEqual(before.stock);
   expect(await countRows(dataDir, 'stock_movement')).toBe(before.movements);
   expect(await countRows(dataDir, 'stock_movement', '"quoteId" = ?', [quote.id])).toBe(0);
+  expect(await countRows(dataDir, 'stock_hold', '"quoteId" = ?', [quote.id])).toBe(0);
   expect(await countRows(dataDir, 'quote_status_event', '"quoteId" = ? AND "toStatus" = ?', [quote.id, 'accepted'])).toBe(0);
   expect(await ledgerMismatches(dataDir)).toEqual([]);
   const desk2 = await signIn(server.url, 'desk');
@@ -61,5 +62,6 @@ test('a kill between reserving the springs and the commit leaves the quote sent 
   const reservedBefore = Object.fromEntries(before.stock.map((s) => [s.id, s.reserved]));
   expect(reservedFor).toEqual({ [springs.front.springId]: reservedBefore[springs.front.springId] + 2, [springs.rear.springId]: reservedBefore[springs.rear.springId] + 1 });
   expect(await countRows(dataDir, 'stock_movement', '"quoteId" = ? AND "kind" = ?', [quote.id, 'reserve'])).toBe(2);
+  expect(await countRows(dataDir, 'stock_hold', '"quoteId" = ? AND "status" = ?', [quote.id, 'open'])).toBe(2);
   expect(await ledgerMismatches(dataDir)).toEqual([]);
 });

@@ -193,6 +193,25 @@ describe('paths that climb out of their folder', () => {
   });
 });
 
+describe('addresses with a broken percent-escape (RFC 3986 §2.1, RFC 3629 §3)', () => {
+  const STACK_OR_PATH = /\bat \w|node_modules|\/work\/|[A-Z]:\\|URIError|<pre>/;
+
+  test.each(['/q/%E0%A4%A', '/desk/quotes/%ff', '/assets/%ff.js', '/%C0%AF'])('the page %s is a short plain 400 with no stack and no path', async (rawPath) => {
+    const res = await rawGet(rawPath);
+    expect(res.status).toBe(400);
+    expect(res.body).toBe('The address has a broken percent-escape (%).');
+    expect(res.body).not.toMatch(STACK_OR_PATH);
+    expect(res.body).not.toContain(path.resolve(__dirname, '../../..'));
+  });
+
+  test('an API address is a JSON 400 that says so', async () => {
+    const res = await rawGet('/api/bikes/%E0%A4%A', { Authorization: await bearer(t, shop.rider) });
+    expect(res.status).toBe(400);
+    expect(JSON.parse(res.body).error.code).toBe('malformed-url');
+    expect(res.body).not.toMatch(STACK_OR_PATH);
+  });
+});
+
 /** True when `text` is one of the string values anywhere in `value`. */
 function holdsText(value: unknown, text: string): boolean {
   if (typeof value === 'string') return value === text;

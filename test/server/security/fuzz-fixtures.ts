@@ -102,8 +102,9 @@ function paramValue(shop: Shop, route: RouteSpec, name: string): string {
   throw new Error(`no value for :id in ${routeKey(route)}`);
 }
 
-export function pathFor(shop: Shop, route: RouteSpec): string {
-  return `/api${route.path.replace(/:(\w+)/g, (_, name: string) => encodeURIComponent(paramValue(shop, route, name)))}`;
+/** The route's path with real values for its parameters, or the text given in `raw` put in as it is. */
+export function pathFor(shop: Shop, route: RouteSpec, raw: Record<string, string> = {}): string {
+  return `/api${route.path.replace(/:(\w+)/g, (_, name: string) => raw[name] ?? encodeURIComponent(paramValue(shop, route, name)))}`;
 }
 
 /** The role the fuzz signs in with: the first allowed of rider (who owns the fixtures' bikes), desk, counter, admin. */
@@ -114,14 +115,19 @@ export function callerFor(route: RouteSpec): Role | undefined {
 }
 
 /** A request on the socket, signed in as the route's caller with a fresh token (sign-out revokes the earlier ones). */
-export async function send(shop: Shop, route: RouteSpec, options: { body?: unknown; raw?: string; query?: string; contentType?: string } = {}) {
-  const url = pathFor(shop, route) + (options.query ? `?${options.query}` : '');
+export async function send(
+  shop: Shop,
+  route: RouteSpec,
+  options: { body?: unknown; raw?: string | Buffer; query?: string; contentType?: string; contentEncoding?: string; rawParams?: Record<string, string> } = {},
+) {
+  const url = pathFor(shop, route, options.rawParams) + (options.query ? `?${options.query}` : '');
   // A request that never answers fails the run instead of hanging it.
   const req = request(shop.base)[route.method](url).timeout({ response: 15_000, deadline: 20_000 });
   const role = callerFor(route);
   if (role) req.set('Authorization', await bearer(shop.t, shop.accounts[role]));
   // Without a signature header the webhook refuses before reading; a wrong one makes it read and verify.
   if (route.access.kind === 'webhook') req.set('stripe-signature', 't=1,v1=00');
+  if (options.contentEncoding) req.set('Content-Encoding', options.contentEncoding);
   if (options.raw !== undefined) return req.set('Content-Type', options.contentType ?? 'application/json').send(options.raw);
   if (options.body !== undefined) return req.set('Content-Type', 'application/json').send(JSON.stringify(options.body));
   return req;

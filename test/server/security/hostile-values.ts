@@ -4,6 +4,7 @@
  * emoji and right-to-left marks, very long strings, deep nesting, and objects keyed by the field
  * names the shared schemas really declare (so a body reaches past the first "unknown key").
  */
+import { gzipSync } from 'node:zlib';
 import * as fc from 'fast-check';
 import { isSchema } from 'yup';
 import * as auth from '../../../shared/schemas/auth.schema';
@@ -139,3 +140,23 @@ export const malformedJson = fc.oneof(
     }
   }),
 );
+
+/**
+ * Percent-escapes that do not decode, for path parameters: cut short, a byte that is never UTF-8,
+ * a lone %, % before letters that are not hex (RFC 3986 §2.1), an overlong "/" and a UTF-16
+ * surrogate written in UTF-8 (both refused by RFC 3629 §3).
+ */
+export const BROKEN_ESCAPES = ['%E0%A4%A', '%ff', '%', '%zz', '%C0%AF', '%ED%A0%80'];
+
+const plainJson = Buffer.from('{"email":"a@example.test","password":"long enough password"}');
+
+/**
+ * Bodies that are not what their Content-Encoding names (RFC 9110 §8.4.1; the codings body-parser
+ * inflates): plain JSON labelled gzip, deflate and br, and a gzip stream cut short.
+ */
+export const MISLABELLED_BODIES: { encoding: string; raw: Buffer }[] = [
+  { encoding: 'gzip', raw: plainJson },
+  { encoding: 'deflate', raw: plainJson },
+  { encoding: 'br', raw: plainJson },
+  { encoding: 'gzip', raw: gzipSync(plainJson).subarray(0, 20) },
+];

@@ -2,10 +2,12 @@
  * Generated bad input (fast-check) to every route of the API table, over a real loopback socket
  * to the real app on a real SQLite file, signed in with a role the route allows.
  *
- * Part one sends only what cannot pass: bytes that are not JSON (to every route), bodies with a
- * field missing that the route itself named as required when sent `{}` (to every route that
- * validates), and hostile query strings (to every GET). Every answer is a 4xx (a GET may answer
- * 200), and the checksum of every table is the same after each route as before it.
+ * Part one sends only what cannot pass: bytes that are not JSON (to every route), path parameters
+ * with percent-escapes that do not decode (to every route that has one), bodies that are not what
+ * their Content-Encoding names (to every route), bodies with a field missing that the route itself
+ * named as required when sent `{}` (to every route that validates), and hostile query strings (to
+ * every GET). Every answer is a 4xx (a GET may answer 200), and the checksum of every table is the
+ * same after each route as before it.
  *
  * Part two sends bodies that may pass (schema field names with hostile values, the required ones
  * included) to every route, the actions without a body too. Writes may happen there; the rule is
@@ -13,7 +15,8 @@
  * foreign keys, and stock equal to the sum of its movements.
  *
  * Both parts: never a 5xx, every route that takes a body shows a 400 with field errors, and the
- * server answers its health check at the end. Sample strings: OWASP WSTG v4.2 (INPV-01, INPV-05).
+ * server answers its health check at the end. Sample strings: OWASP WSTG v4.2 (INPV-01, INPV-05);
+ * broken escapes: RFC 3986 §2.1 and RFC 3629 §3; content codings: RFC 9110 §8.4.1.
  */
 import * as fc from 'fast-check';
 import request from 'supertest';
@@ -32,7 +35,7 @@ import { RouteSpec } from '../../../server/routes/route-table';
 import { ledgerMismatches } from '../catalogue/helpers';
 import { changedTables, tableChecksums } from './db-checksum';
 import { openShop, routeKey, send, Shop } from './fuzz-fixtures';
-import { hostileBody, hostileQuery, malformedJson, schemaFieldNames } from './hostile-values';
+import { BROKEN_ESCAPES, hostileBody, hostileQuery, malformedJson, MISLABELLED_BODIES, schemaFieldNames } from './hostile-values';
 
 /** Actions whose handlers read no body: they act on the path alone, so a body can neither help nor hurt. */
 const BODILESS = new Set([
@@ -121,6 +124,34 @@ describe('part one: input that cannot pass writes nothing', () => {
         { numRuns: RUNS_PER_ROUTE.malformed },
       ),
     );
+  }, 120_000);
+
+  test('a broken percent-escape in any path parameter is a 400 on every route that has one, before any handler runs', async () => {
+    const withParameters = shop.routes.filter((route) => route.path.includes('/:'));
+    expect(withParameters.length).toBeGreaterThan(30);
+    const wrong: string[] = [];
+    await withUnchangedDatabase(withParameters, async (route) => {
+      for (const [, name] of route.path.matchAll(/:(\w+)/g)) {
+        for (const escape of BROKEN_ESCAPES) {
+          const res = await send(shop, route, { rawParams: { [name]: escape } });
+          note(route, res, escape);
+          if (res.status !== 400 || res.body.error?.code !== 'malformed-url') wrong.push(`${routeKey(route)} :${name}=${escape}: ${res.status} ${res.text.slice(0, 200)}`);
+        }
+      }
+    });
+    expect(wrong).toEqual([]);
+  }, 120_000);
+
+  test('a body that is not what its Content-Encoding names is a 400 on every route, the webhook included', async () => {
+    const wrong: string[] = [];
+    await withUnchangedDatabase(shop.routes, async (route) => {
+      for (const { encoding, raw } of MISLABELLED_BODIES) {
+        const res = await send(shop, route, { raw, contentEncoding: encoding });
+        note(route, res, encoding);
+        if (res.status !== 400 || res.body.error?.code !== 'malformed-body') wrong.push(`${routeKey(route)} ${encoding} (${raw.length} bytes): ${res.status} ${res.text.slice(0, 200)}`);
+      }
+    });
+    expect(wrong).toEqual([]);
   }, 120_000);
 
   test('the routes that take a JSON body name their required fields when sent {}', () => {

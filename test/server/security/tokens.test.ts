@@ -1,6 +1,8 @@
 /**
  * What test/server/auth/tokens.test.ts leaves out: forged refresh cookies (alg none, another key,
- * another algorithm; RFC 8725 §2.1, §3.1), an access token signed with a fresh RSA key, and the
+ * another algorithm; RFC 8725 §2.1, §3.1), an access token signed with a fresh RSA key, tokens
+ * signed with the real secret but without `exp` (RFC 7519 §4.1.4 makes it optional; required here,
+ * since such a token would never expire: common practice, no source), and the
  * customer's quote link token. That token is 32 bytes from crypto.randomBytes, base64url without
  * padding (RFC 4648 §5): 43 characters carrying 256 bits, so guessing one of n live links takes
  * about 2^256 / n tries. It opens its one quote and nothing else: not as a bearer token, not as a
@@ -23,6 +25,7 @@ beforeAll(async () => {
 afterAll(() => shop.close());
 
 const b64 = (value: object) => Buffer.from(JSON.stringify(value)).toString('base64url');
+const withoutExp = ({ exp: _exp, ...claims }: jwt.JwtPayload) => claims;
 
 describe('forged session tokens', () => {
   let claims: jwt.JwtPayload;
@@ -44,6 +47,7 @@ describe('forged session tokens', () => {
     ['HS512 with the right secret', () => jwt.sign(claims, shop.t.secrets.jwt, { algorithm: 'HS512' })],
     ['RS256 with a fresh key', () => jwt.sign(claims, privateKey, { algorithm: 'RS256' })],
     ['an access token', () => new SessionService(shop.t).issue(shop.accounts.rider, 'access')],
+    ['the right secret and algorithm but no exp', () => jwt.sign(withoutExp(claims), shop.t.secrets.jwt, { algorithm: 'HS256' })],
   ])('a refresh cookie forged with %s is refused', async (_label, forge) => {
     const res = await refresh(forge()).expect(401);
     expect(res.body.error.code).toBe('session-expired');
@@ -53,6 +57,12 @@ describe('forged session tokens', () => {
     const access = jwt.decode(new SessionService(shop.t).issue(shop.accounts.admin, 'access'), { json: true })!;
     await request(shop.base).get('/api/me').set('Authorization', `Bearer ${jwt.sign(access, privateKey, { algorithm: 'RS256' })}`).expect(401);
     await request(shop.base).get('/api/me').set('Authorization', `Bearer ${jwt.sign({ ...access, sub: '999999' }, shop.t.secrets.jwt, { algorithm: 'HS256' })}`).expect(401);
+  });
+
+  test('an access token signed with the real secret but without exp is refused', async () => {
+    const access = jwt.decode(new SessionService(shop.t).issue(shop.accounts.admin, 'access'), { json: true })!;
+    await request(shop.base).get('/api/me').set('Authorization', `Bearer ${jwt.sign(access, shop.t.secrets.jwt, { algorithm: 'HS256' })}`).expect(200);
+    await request(shop.base).get('/api/me').set('Authorization', `Bearer ${jwt.sign(withoutExp(access), shop.t.secrets.jwt, { algorithm: 'HS256' })}`).expect(401);
   });
 });
 

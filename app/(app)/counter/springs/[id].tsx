@@ -2,11 +2,12 @@ import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { HoldList } from '@/components/catalogue/hold-list';
 import { MovementList } from '@/components/catalogue/movement-list';
 import { Pager } from '@/components/catalogue/pager';
 import { SpringEditForm } from '@/components/catalogue/spring-edit-form';
 import { SpringFacts } from '@/components/catalogue/spring-facts';
-import { CountForm, ReceiveForm } from '@/components/catalogue/stock-forms';
+import { CountForm, HoldForm, ReceiveForm } from '@/components/catalogue/stock-forms';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -15,13 +16,13 @@ import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
-import { MOVEMENTS_PAGE_SIZE, useSpring, useSpringChanges } from '@/hooks/use-spring';
+import { MOVEMENTS_PAGE_SIZE, useSpring, useSpringChanges, useSpringHolds } from '@/hooks/use-spring';
 import { useUnits } from '@/hooks/use-units';
 import { useTheme } from '@/theme';
 import type { SpringDetail, StockAnswer } from '@shared/types/catalogue';
 import type { RateUnit } from '@shared/units';
 
-type Panel = 'receive' | 'count' | 'edit' | undefined;
+type Panel = 'receive' | 'count' | 'hold' | 'edit' | undefined;
 
 export default function SpringDetailScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -70,6 +71,7 @@ export default function SpringDetailScreen() {
 function SpringBody({ spring, unit }: { spring: SpringDetail; unit: RateUnit }) {
   const { spacing } = useTheme();
   const changes = useSpringChanges(spring.id);
+  const holds = useSpringHolds(spring.id);
   const [panel, setPanel] = useState<Panel>();
   const [notice, setNotice] = useState<string>();
   const [failure, setFailure] = useState<string>();
@@ -77,6 +79,10 @@ function SpringBody({ spring, unit }: { spring: SpringDetail; unit: RateUnit }) 
   const stockDone = (verb: string) => (answer: StockAnswer) => {
     setPanel(undefined);
     setNotice(`${verb}: on hand is now ${'onHand' in answer.spring ? answer.spring.onHand : '–'}.`);
+  };
+  const holdDone = (verb: string) => (answer: StockAnswer) => {
+    setPanel(undefined);
+    setNotice(`${verb} hold #${answer.hold?.id}: reserved is now ${'reserved' in answer.spring ? answer.spring.reserved : '–'}.`);
   };
   const open = (next: Panel) => {
     setNotice(undefined);
@@ -107,6 +113,7 @@ function SpringBody({ spring, unit }: { spring: SpringDetail; unit: RateUnit }) 
       <View style={[styles.actions, { gap: spacing.sm }]}>
         <Button label="Receive stock" variant={panel === 'receive' ? 'primary' : 'secondary'} onPress={() => open('receive')} />
         <Button label="Correct the count" variant={panel === 'count' ? 'primary' : 'secondary'} onPress={() => open('count')} />
+        <Button label="Hold springs" variant={panel === 'hold' ? 'primary' : 'secondary'} onPress={() => open('hold')} />
         <Button label="Edit details" variant={panel === 'edit' ? 'primary' : 'secondary'} onPress={() => open('edit')} />
         <Button
           variant="secondary"
@@ -132,12 +139,30 @@ function SpringBody({ spring, unit }: { spring: SpringDetail; unit: RateUnit }) 
           <CountForm onCount={changes.count} onDone={stockDone('Count recorded')} />
         </Card>
       )}
+      {panel === 'hold' && (
+        <Card>
+          <ThemedText type="heading">Hold springs</ThemedText>
+          <HoldForm onHold={changes.hold} onDone={holdDone('Made')} />
+        </Card>
+      )}
       {panel === 'edit' && (
         <Card>
           <ThemedText type="heading">Edit details</ThemedText>
           <SpringEditForm spring={spring} unit={unit} onSave={changes.update} onDone={() => setPanel(undefined)} />
         </Card>
       )}
+      <Card>
+        <ThemedText type="heading">Who holds them</ThemedText>
+        {holds.error && !holds.data ? (
+          <ThemedText role="alert" color="danger">{`The holds could not be loaded: ${holds.error.message}`}</ThemedText>
+        ) : !holds.data ? (
+          <LoadingState label="Loading the holds…" />
+        ) : holds.data.holds.length === 0 ? (
+          <ThemedText color="textMuted">Nothing is held: every unit on hand is available.</ThemedText>
+        ) : (
+          <HoldList holds={holds.data.holds} onRelease={changes.release} onOverride={changes.overrideRelease} onDone={holdDone('Released from')} />
+        )}
+      </Card>
     </>
   );
 }

@@ -27,7 +27,7 @@ import { useLayout, useTheme } from '@/theme';
 import type { QuoteStatus, QuoteView } from '@shared/types/quote';
 
 const REVISABLE: readonly QuoteStatus[] = ['sent', 'declined', 'expired'];
-const CANCELLABLE: readonly QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked'];
+const CANCELLABLE: readonly QuoteStatus[] = ['draft', 'sent', 'accepted', 'deposit-paid', 'booked', 'springs-released'];
 
 export default function QuoteEditorScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
@@ -199,6 +199,15 @@ function Actions({ quote, busy, run, changes }: ActionsProps) {
             }
           />
         </View>
+      )}
+      {quote.status === 'springs-released' && (
+        <ThemedText testID="springs-released-note">
+          {`The parts counter released springs this quote held (the history says which and why), so it cannot be fitted as quoted. Cancel it${
+            quote.paidCents > quote.refundedCents
+              ? ` to refund the deposit of ${formatMoney(quote.paidCents - quote.refundedCents, quote.currency)}`
+              : ''
+          }, then quote again if the customer still wants the work.`}
+        </ThemedText>
       )}
       {quote.status === 'fitted' && (
         <ThemedText testID="balance-due">

@@ -12,6 +12,7 @@ const settings: ShopSettingsView = {
   operations: [{ code: 'fork-spring', label: 'Fit fork springs', minutes: 90 }],
   quoteValidityDays: 30,
   cautions: 'Ride gently for the first 50 km.',
+  publicUrl: null,
   updatedAt: '2025-01-01T00:00:00.000Z',
 };
 
@@ -29,6 +30,7 @@ describe('ShopSettingsForm', () => {
     fireEvent.changeText(screen.getByLabelText('Operation 2 code'), 'shock-spring');
     fireEvent.changeText(screen.getByLabelText('Operation 2 name'), 'Fit a shock spring');
     fireEvent.changeText(screen.getByLabelText('Operation 2 standard minutes'), '60');
+    fireEvent.changeText(screen.getByLabelText('Public web address'), ' HTTPS://Shop.Example/ ');
     fireEvent.press(screen.getByRole('button', { name: 'Save the shop settings' }));
     await waitFor(() => expect(save).toHaveBeenCalled());
     expect(save.mock.calls[0][0]).toEqual({
@@ -41,6 +43,7 @@ describe('ShopSettingsForm', () => {
       ],
       quoteValidityDays: 30,
       cautions: 'Ride gently for the first 50 km.',
+      publicUrl: 'https://shop.example',
     });
   });
 

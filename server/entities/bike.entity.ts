@@ -5,7 +5,7 @@ import type { BikeMasses } from '../../shared/types/sizing';
 
 /**
  * A bike in a rider's garage: a copy of a shop model's values (the link kept) or values entered by
- * hand, with the rider's own changes. Its current springs, preload and clicker settings live here;
+ * hand, with the rider's own changes. Its current springs, preload and damping adjuster settings live here;
  * the setup log keeps how they got there.
  */
 @Entity({ name: 'bike' })

@@ -21,5 +21,8 @@ import { QuoteLine } from './quote-line.entity';
 import { QuoteStatusEvent } from './quote-status-event.entity';
 import { Payment } from './payment.entity';
 import { PaymentWebhookEvent } from './payment-webhook-event.entity';
+import { DamperKind } from './damper-kind.entity';
+import { DampingRule } from './damping-rule.entity';
+import { TestRide } from './test-ride.entity';
 
-export const entities = [Shop, SeedRecord, SpringRate, TargetProfile, EngineSetting, User, PasswordReset, StockMovement, StockHold, ImportBatch, BikeModel, Bike, RiderProfile, MeasuringDraft, SizingRecord, SetupLogEntry, AuditEntry, ShopSettings, Quote, QuoteLine, QuoteStatusEvent, Payment, PaymentWebhookEvent];
+export const entities = [Shop, SeedRecord, SpringRate, TargetProfile, EngineSetting, User, PasswordReset, StockMovement, StockHold, ImportBatch, BikeModel, Bike, RiderProfile, MeasuringDraft, SizingRecord, SetupLogEntry, AuditEntry, ShopSettings, Quote, QuoteLine, QuoteStatusEvent, Payment, PaymentWebhookEvent, DamperKind, DampingRule, TestRide];

@@ -1,7 +1,7 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { SetupEntryKind, SetupSettings } from '../../shared/types/setup-log';
 
-/** One line of a bike's setup log: a saved pass, or a change to its springs, preload or clickers. */
+/** One line of a bike's setup log: a saved pass, or a change to its springs, preload or damping adjusters. */
 @Entity({ name: 'setup_log_entry' })
 @Index('idx_setup_log_bike', ['bikeId', 'id'])
 export class SetupLogEntry {

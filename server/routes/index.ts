@@ -21,8 +21,12 @@ import { customerRoutes } from './customers.router';
 import { paymentRoutes } from './payments.router';
 import { quoteRoutes } from './quotes.router';
 import { shopSettingsRoutes } from './shop-settings.router';
+import { damperKindRoutes } from './damper-kinds.router';
+import { dampingRuleRoutes } from './damping-rules.router';
+import { testRideRoutes } from './test-rides.router';
+import { damperPlanRoutes } from './damper-plans.router';
 
 /** The whole API, in one table. */
 export function apiRoutes(ctx: AppContext): RouteSpec[] {
-  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...loadCaseRoutes(ctx), ...shopDataRoutes(ctx), ...shopSettingsRoutes(ctx), ...customerRoutes(ctx), ...quoteRoutes(ctx), ...customerQuoteRoutes(ctx), ...paymentRoutes(ctx)];
+  return [...healthRoutes(ctx), ...authRoutes(ctx), ...userRoutes(ctx), ...sizingRoutes(ctx), ...devRoutes(ctx), ...catalogueRoutes(ctx), ...stockRoutes(ctx), ...importRoutes(ctx), ...bikeModelRoutes(ctx), ...bikeRoutes(ctx), ...profileRoutes(ctx), ...draftRoutes(ctx), ...sizingRecordRoutes(ctx), ...setupLogRoutes(ctx), ...loadCaseRoutes(ctx), ...shopDataRoutes(ctx), ...shopSettingsRoutes(ctx), ...customerRoutes(ctx), ...quoteRoutes(ctx), ...customerQuoteRoutes(ctx), ...paymentRoutes(ctx), ...damperKindRoutes(ctx), ...dampingRuleRoutes(ctx), ...testRideRoutes(ctx), ...damperPlanRoutes(ctx)];
 }

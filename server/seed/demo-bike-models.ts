@@ -1,13 +1,18 @@
 /**
  * The invented bike models of the demo workshop's catalogue, fitted with springs of the demo
  * catalogue's families (server/seed/demo-catalogue.ts): one roadster, one tourer, one trail bike
- * with a linkage curve, one sport bike. Every figure is invented for the demo.
+ * with a linkage curve, one sport bike. Every figure is invented for the demo, the damping
+ * adjusters' counts and makers' standards among them; none has a dyno sheet.
  */
 import { EntityManager } from 'typeorm';
+import type { DamperAdjuster, DamperUnit } from '../../shared/types/damping';
 import { BikeModel } from '../entities/bike-model.entity';
 import type { BikeModelInput } from '../services/bike-models.service';
 
-const NO_CLICKERS = { rebound: null, compression: null };
+/** An adjuster set at its maker's standard. */
+function damper(kind: string, unit: DamperUnit, maxPosition: number, standard: number): DamperAdjuster {
+  return { kind, unit, maxPosition, standard, position: standard, dampingPerStepNsPerM: null };
+}
 
 export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
   {
@@ -24,7 +29,8 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 15,
       family: 'F37x320',
       adjuster: { kind: 'spacer', mmPerUnit: 1, position: 0, minPosition: -10, maxPosition: 20, zeroReference: 'the 90 mm stock spacer', addsPreload: 'longer spacer' },
-      clickers: NO_CLICKERS,
+      // A budget fork: damping fixed by its oil and valving.
+      dampers: [],
     },
     rear: {
       wheelTravelMm: 135,
@@ -37,12 +43,13 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 8,
       family: 'S56x150',
       adjuster: { kind: 'stepped', mmPerUnit: 2.5, position: 2, minPosition: 0, maxPosition: 6, zeroReference: 'the softest step', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 10, maxPosition: 20 }, compression: null },
+      // A slotted rebound screw without detents, counted in turns.
+      dampers: [damper('rebound', 'turns', 3, 1.5)],
     },
   },
   {
     name: 'Harrow 900 Tourer',
-    description: 'Touring triple: fork with preload caps, shock with a remote preload knob and both clickers.',
+    description: 'Touring triple: fork with preload caps, shock with a remote preload knob, rebound and compression adjusters.',
     masses: { massKg: 248, frontShare: 0.48, unsprungFrontKg: 20, unsprungRearKg: 26 },
     front: {
       travelMm: 130,
@@ -54,7 +61,7 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 12,
       family: 'F43x290',
       adjuster: { kind: 'threaded', mmPerUnit: 1, position: 6, minPosition: 0, maxPosition: 15, zeroReference: 'caps screwed fully out', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 8, maxPosition: 16 }, compression: null },
+      dampers: [damper('rebound', 'clicks', 16, 8)],
     },
     rear: {
       wheelTravelMm: 140,
@@ -67,7 +74,7 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 10,
       family: 'S61x170',
       adjuster: { kind: 'threaded', mmPerUnit: 0.5, position: 10, minPosition: 0, maxPosition: 30, zeroReference: 'knob turned fully counter-clockwise', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 12, maxPosition: 24 }, compression: { position: 10, maxPosition: 20 } },
+      dampers: [damper('rebound', 'clicks', 24, 12), damper('compression', 'clicks', 20, 10)],
     },
   },
   {
@@ -84,7 +91,7 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 5,
       family: 'F37x320',
       adjuster: { kind: 'threaded', mmPerUnit: 1, position: 2, minPosition: 0, maxPosition: 8, zeroReference: 'caps screwed fully out', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 12, maxPosition: 20 }, compression: { position: 12, maxPosition: 20 } },
+      dampers: [damper('rebound', 'clicks', 20, 12), damper('compression', 'clicks', 20, 12)],
     },
     rear: {
       wheelTravelMm: 200,
@@ -112,12 +119,13 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
         zeroReference: 'collar at the top of the thread',
         addsPreload: 'counter-clockwise',
       },
-      clickers: { rebound: { position: 14, maxPosition: 24 }, compression: { position: 12, maxPosition: 20 } },
+      // Off-road style: high-speed compression on a knob counted in turns, low-speed on a clicker screw.
+      dampers: [damper('rebound', 'clicks', 24, 14), damper('hs-compression', 'turns', 2.5, 1.25), damper('ls-compression', 'clicks', 20, 12)],
     },
   },
   {
     name: 'Vell 1000 Sport',
-    description: 'Four-cylinder sport bike: fully adjustable fork and shock.',
+    description: 'Four-cylinder sport bike: fully adjustable fork and shock, compression split into high and low speed.',
     masses: { massKg: 201, frontShare: 0.53, unsprungFrontKg: 16, unsprungRearKg: 20 },
     front: {
       travelMm: 120,
@@ -129,7 +137,7 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 10,
       family: 'F43x290',
       adjuster: { kind: 'threaded', mmPerUnit: 1, position: 8, minPosition: 0, maxPosition: 15, zeroReference: 'caps screwed fully out', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 10, maxPosition: 20 }, compression: { position: 10, maxPosition: 20 } },
+      dampers: [damper('rebound', 'clicks', 20, 10), damper('hs-compression', 'clicks', 12, 6), damper('ls-compression', 'clicks', 20, 9)],
     },
     rear: {
       wheelTravelMm: 130,
@@ -142,7 +150,7 @@ export const DEMO_BIKE_MODELS: readonly BikeModelInput[] = [
       preloadMm: 8,
       family: 'S56x150',
       adjuster: { kind: 'threaded', mmPerUnit: 1, position: 6, minPosition: 0, maxPosition: 14, zeroReference: 'collar backed off to the lock ring', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 12, maxPosition: 24 }, compression: { position: 10, maxPosition: 20 } },
+      dampers: [damper('rebound', 'clicks', 24, 11), damper('hs-compression', 'clicks', 10, 4), damper('ls-compression', 'clicks', 20, 10)],
     },
   },
 ];

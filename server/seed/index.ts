@@ -13,6 +13,7 @@ import { seedDemoCatalogue } from './demo-catalogue';
 import { seedDemoWorkshop } from './demo-workshop';
 import { seedDecisionEngine } from './decision-engine';
 import { seedSizingDefaults } from './sizing-baseline';
+import { seedDampingRules } from './damping-rules';
 
 interface SeedPart {
   name: string;
@@ -22,6 +23,7 @@ interface SeedPart {
 const baselineParts: SeedPart[] = [
   { name: 'sizing-defaults', run: seedSizingDefaults },
   { name: 'decision-engine', run: seedDecisionEngine },
+  { name: 'damping-rules', run: seedDampingRules },
 ];
 
 const demoParts: SeedPart[] = [

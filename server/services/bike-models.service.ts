@@ -6,6 +6,7 @@ import { BikeModel } from '../entities/bike-model.entity';
 import { ConflictError, NotFoundError } from '../errors';
 import { AuthUser } from '../middleware/auth';
 import { recordAudit } from './audit.service';
+import { assertKnownDamperKinds } from './damper-kinds.service';
 
 export interface BikeModelInput extends BikeSpec {
   name: string;
@@ -53,6 +54,7 @@ export class BikeModelsService {
   create(actor: AuthUser, input: BikeModelInput): Promise<BikeModelView> {
     return this.ctx.db.write(async (manager) => {
       await assertNameFree(manager, input.name);
+      await assertKnownDamperKinds(manager, input);
       const now = this.ctx.now();
       const row = await manager.save(manager.create(BikeModel, { ...input, createdAt: now, updatedAt: now }));
       const view = toBikeModelView(row);
@@ -66,6 +68,7 @@ export class BikeModelsService {
       const row = await manager.findOneBy(BikeModel, { id });
       if (!row) throw new NotFoundError('There is no such bike model.');
       await assertNameFree(manager, input.name, id);
+      await assertKnownDamperKinds(manager, input);
       const before = toBikeModelView(row);
       const now = this.ctx.now();
       const saved = await manager.save(BikeModel, { ...row, ...input, updatedAt: now });

@@ -17,6 +17,7 @@ import { AuthUser } from '../middleware/auth';
 import { assertOwnerOrStaff, seesAllCustomers } from '../middleware/ownership';
 import { parseInput } from '../routes/validate';
 import { isCustomer } from './customers.service';
+import { assertKnownDamperKinds } from './damper-kinds.service';
 import { latestSummaries } from './sizing-record-view';
 
 export interface BikeCreateInput {
@@ -56,9 +57,11 @@ export async function resolveRider(manager: EntityManager, user: Pick<AuthUser, 
   return riderId;
 }
 
-/** The whole bike, checked as the form checks it: field by field, and sizeable as a whole. */
-export async function checkSpec(spec: Partial<BikeSpec>): Promise<BikeSpec> {
-  return (await parseInput(bikeSpecSchema, spec)) as unknown as BikeSpec;
+/** The whole bike, checked as the form checks it (field by field, and sizeable as a whole), its damping adjusters of kinds on the shop's list. */
+export async function checkSpec(manager: EntityManager, spec: Partial<BikeSpec>): Promise<BikeSpec> {
+  const checked = (await parseInput(bikeSpecSchema, spec)) as unknown as BikeSpec;
+  await assertKnownDamperKinds(manager, checked);
+  return checked;
 }
 
 export class BikesService {
@@ -86,7 +89,7 @@ export class BikesService {
     }
     const model = input.modelId === undefined ? null : await read.findOneBy(BikeModel, { id: input.modelId });
     if (input.modelId !== undefined && !model) throw new ValidationError({ modelId: 'There is no such bike model: choose one from the list.' });
-    const spec = await checkSpec({
+    const spec = await checkSpec(read, {
       masses: input.masses ?? model?.masses,
       front: input.front === undefined ? (model?.front ?? null) : input.front,
       rear: input.rear === undefined ? (model?.rear ?? null) : input.rear,
@@ -103,7 +106,7 @@ export class BikesService {
 
   /** The whole bike as its form holds it; the model link stays. Not a setup change: corrections of what was entered. */
   async update(user: AuthUser, id: number, input: BikeUpdateInput): Promise<GarageBike> {
-    const spec = await checkSpec(input);
+    const spec = await checkSpec(this.ctx.db.read.manager, input);
     await this.ctx.db.write(async (manager) => {
       const bike = await findOwnedBike(manager, user, id);
       // A corrected spring or adjuster leaves the load case's solo positions meaningless.

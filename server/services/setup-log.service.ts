@@ -9,7 +9,8 @@ import { ValidationError as YupValidationError } from 'yup';
 import { bikeSpecSchema } from '../../shared/schemas/bike.schema';
 import { toFieldErrors } from '../../shared/schemas/field-errors';
 import { planBackToBaseline } from '../../shared/setup/back-to-baseline';
-import { applySetupChange, diffSettings, settingsOf } from '../../shared/setup/settings';
+import { labelsOf } from '../../shared/setup/damper-words';
+import { applySetupChange, damperUnitsOf, diffSettings, settingsOf, type DamperUnits } from '../../shared/setup/settings';
 import type { GarageBike, SizingRecordSummary } from '../../shared/types/garage';
 import type { BackToBaseline, SetupChangeInput, SetupLog, SetupLogEntry as EntryView, SetupSettings } from '../../shared/types/setup-log';
 import { AppContext } from '../context';
@@ -18,9 +19,11 @@ import { SetupLogEntry } from '../entities/setup-log-entry.entity';
 import { ValidationError } from '../errors';
 import { AuthUser } from '../middleware/auth';
 import { BikesService, findOwnedBike, specOf } from './bikes.service';
+import { DamperKindsService } from './damper-kinds.service';
 import { summariesByIds } from './sizing-record-view';
 
-function toEntryView(row: SetupLogEntry, sizing: ReadonlyMap<number, SizingRecordSummary>): EntryView {
+/** `units` are the bike's damping adjusters' units as they are now: the stored settings hold positions only. */
+function toEntryView(row: SetupLogEntry, sizing: ReadonlyMap<number, SizingRecordSummary>, units: DamperUnits): EntryView {
   return {
     id: row.id,
     bikeId: row.bikeId,
@@ -30,7 +33,7 @@ function toEntryView(row: SetupLogEntry, sizing: ReadonlyMap<number, SizingRecor
     createdById: row.createdById,
     before: row.before,
     after: row.after,
-    changes: diffSettings(row.before, row.after),
+    changes: diffSettings(row.before, row.after, units),
     sizing: row.sizingRecordId === null ? null : (sizing.get(row.sizingRecordId) ?? null),
   };
 }
@@ -109,9 +112,11 @@ export async function writeSetupChange(
 
 export class SetupLogService {
   private readonly bikes: BikesService;
+  private readonly damperKinds: DamperKindsService;
 
   constructor(private readonly ctx: Pick<AppContext, 'db' | 'now'>) {
     this.bikes = new BikesService(ctx);
+    this.damperKinds = new DamperKindsService(ctx);
   }
 
   async list(user: AuthUser, bikeId: number): Promise<SetupLog> {
@@ -122,8 +127,9 @@ export class SetupLogService {
       this.ctx.db,
       rows.map((r) => r.sizingRecordId).filter((id): id is number => id !== null),
     );
+    const units = damperUnitsOf(bike);
     return {
-      entries: rows.map((row) => toEntryView(row, sizing)),
+      entries: rows.map((row) => toEntryView(row, sizing, units)),
       baseline: rows[0]?.before ?? null,
       current: settingsOf(bike),
     };
@@ -152,7 +158,12 @@ export class SetupLogService {
     const first = await read.findOne(SetupLogEntry, { select: { id: true, before: true }, where: { bikeId }, order: { id: 'ASC' } });
     const current = settingsOf(bike);
     if (!first) return { baseline: null, current, plan: null };
-    const plan = planBackToBaseline(first.before, current, { front: bike.front?.adjuster, rear: bike.rear?.adjuster });
+    const plan = planBackToBaseline(
+      first.before,
+      current,
+      { front: bike.front?.adjuster, rear: bike.rear?.adjuster },
+      { units: damperUnitsOf(bike), labels: labelsOf(await this.damperKinds.list()) },
+    );
     return { baseline: first.before, current, plan };
   }
 }

@@ -1,7 +1,7 @@
 /**
  * A sizing request (the body of POST /api/sizing) from a stored bike, a weigh-in and the readings
  * taken. The bike's values map one to one onto the request; what only the rider needs (the
- * adjuster's zero and turning direction, the clickers) stays behind.
+ * adjuster's zero and turning direction, the damping adjusters) stays behind.
  */
 
 import type { BikeSpec, FrontSpec, RearSpec } from '../types/bike';

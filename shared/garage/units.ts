@@ -46,8 +46,6 @@ export function displayUnitOf(quantity: FieldQuantity, units: DisplayUnits, adju
       return unitFor(quantity, units);
     case 'adjuster':
       return adjusterUnit;
-    case 'clicks':
-      return 'clicks';
     case 'angle':
       return 'deg';
     default:

@@ -2,18 +2,20 @@
  * Every value of a bike (and of a shop's bike model) with its label, its quantity (which decides the
  * unit it is shown in), its range in SI and a one-line help text saying where to find it or how to
  * measure it. The bike schema reads its ranges from here, so the form and the checks cannot drift.
- * Keyed by the field's path in the bike's JSON, e.g. 'front.adjuster.mmPerUnit'.
+ * Keyed by the field's path in the bike's JSON, e.g. 'front.adjuster.mmPerUnit'. The damping
+ * adjusters are a list per end (`front.dampers[1].position`): their fields are DAMPER_FIELDS.
  */
 
+import type { DamperAdjuster, DamperUnit } from '../types/damping';
 import type { EndKind } from '../types/sizing';
 import type { NumberRange } from './number-field';
 
 /**
  * How a value is shown: 'length' in mm or in, 'mass' in kg or lb, 'rate' in N/mm, kgf/mm or lbf/in,
  * 'force' in N or lbf; 'adjuster' in the preload adjuster's own unit (turns, steps or spacer mm);
- * 'clicks'; 'share' as a fraction; 'angle' in degrees; 'count', 'text', 'choice' and 'points' as they are.
+ * 'share' as a fraction; 'angle' in degrees; 'count', 'text', 'choice' and 'points' as they are.
  */
-export type FieldQuantity = 'length' | 'mass' | 'rate' | 'force' | 'adjuster' | 'clicks' | 'share' | 'angle' | 'count' | 'text' | 'choice' | 'points';
+export type FieldQuantity = 'length' | 'mass' | 'rate' | 'force' | 'adjuster' | 'share' | 'angle' | 'count' | 'text' | 'choice' | 'points';
 
 export interface BikeFieldInfo {
   label: string;
@@ -26,7 +28,6 @@ export interface BikeFieldInfo {
 }
 
 const POSITION_RANGE: NumberRange = { min: -1000, max: 1000 };
-const CLICK_RANGE: NumberRange = { min: 0, max: 100, integer: true };
 
 const massFields: Record<string, BikeFieldInfo> = {
   'masses.massKg': {
@@ -150,28 +151,6 @@ function springAndAdjusterFields(end: EndKind): Record<string, BikeFieldInfo> {
       siUnit: '',
       help: 'Which way adds preload, seen from where you work the adjuster: clockwise or counter-clockwise; for a spacer, a longer spacer.',
     },
-    ...clickerFields(end, 'rebound', 'Rebound'),
-    ...clickerFields(end, 'compression', 'Compression'),
-  };
-}
-
-function clickerFields(end: EndKind, kind: 'rebound' | 'compression', label: string): Record<string, BikeFieldInfo> {
-  const where = end === 'front' ? 'on the fork cap or the foot of the leg' : kind === 'rebound' ? 'near the shock’s lower eye' : 'on the reservoir';
-  return {
-    [`${end}.clickers.${kind}.position`]: {
-      label: `${label} clicker`,
-      quantity: 'clicks',
-      siUnit: '',
-      range: CLICK_RANGE,
-      help: `Clicks out from fully closed (the clicker is usually ${where}): turn it gently in (clockwise on most) to the stop, counting the clicks, then back out as many. Leave it out if there is none.`,
-    },
-    [`${end}.clickers.${kind}.maxPosition`]: {
-      label: `${label} clicks in all`,
-      quantity: 'clicks',
-      siUnit: '',
-      range: { min: 1, max: 100, integer: true },
-      help: 'Clicks from fully closed to fully open, from the manual or counted once.',
-    },
   };
 }
 
@@ -232,6 +211,37 @@ const rearFields: Record<string, BikeFieldInfo> = {
 };
 
 export const BIKE_FIELDS: Readonly<Record<string, BikeFieldInfo>> = { ...massFields, ...frontFields, ...rearFields };
+
+/** How far out fully open may be: no damper has more clicks than this, or more turns (common practice, no source). */
+export const DAMPER_MAX_OPEN: Readonly<Record<DamperUnit, number>> = { clicks: 100, turns: 20 };
+
+/** N s/m per step; a figure above this is a slip of the keyboard, not a dyno sheet's (common practice, no source). */
+export const DAMPING_PER_STEP_RANGE: NumberRange = { min: 0, max: 100_000, aboveMin: true };
+
+/** An end has a handful of damping adjusters at most; the bound keeps a stored bike small. */
+export const MAX_DAMPERS_PER_END = 12;
+
+/**
+ * The values of one damping adjuster, `<end>.dampers[i].<field>`. Settings count out from fully
+ * closed in the adjuster's own unit, clicks or turns.
+ */
+export const DAMPER_FIELDS: Readonly<Record<keyof DamperAdjuster, { label: string; help: string }>> = {
+  kind: { label: 'Adjuster', help: 'What it adjusts, from the shop’s list of adjuster kinds.' },
+  unit: { label: 'Counted in', help: 'Clicks, or turns for an adjuster without detents (set in quarter turns).' },
+  maxPosition: {
+    label: 'Fully open',
+    help: 'Out from fully closed to the other stop, from the manual or counted once: turn it gently in (clockwise on most) to the stop, then out to the end.',
+  },
+  standard: { label: 'Maker’s standard', help: 'The standard setting the service manual gives, out from fully closed; leave empty if not known.' },
+  position: {
+    label: 'Set now',
+    help: 'Where it is now, out from fully closed: turn it gently in to the stop, counting, then back out as many.',
+  },
+  dampingPerStepNsPerM: {
+    label: 'Damping per step',
+    help: 'From a dyno sheet of this damper only: how much the damping at the wheel falls per step out. Leave empty otherwise.',
+  },
+};
 
 /** The field's info; throws for a path that is not a bike field, so a typo fails at once. */
 export function bikeField(path: string): BikeFieldInfo {

@@ -5,10 +5,13 @@
  * linkage curve, adjuster range, unsprung mass against the weight share) are the engine's exactly.
  */
 
-import { array, mixed, number, object, string, ValidationError } from 'yup';
-import { CLICKER_KINDS, PRELOAD_DIRECTIONS, type PreloadDirection } from '../types/bike';
+import { array, mixed, number, object, string, ValidationError, type TestContext } from 'yup';
+import { checkDamperSetting, isWholeStep } from '../damping/adjuster-range';
+import { PRELOAD_DIRECTIONS, type PreloadDirection } from '../types/bike';
+import { DAMPER_UNITS, type DamperAdjuster, type DamperUnit } from '../types/damping';
 import type { AdjusterKind, EndKind } from '../types/sizing';
-import { bikeField } from './bike.fields';
+import { bikeField, DAMPER_FIELDS, DAMPER_MAX_OPEN, DAMPING_PER_STEP_RANGE, MAX_DAMPERS_PER_END } from './bike.fields';
+import { DAMPER_KIND_KEY, DAMPER_KIND_KEY_MESSAGE } from './damper-kind.schema';
 import { nullableNumberField, numberField, optionalNumberField } from './number-field';
 import { validateSizingRequest } from './sizing.schema';
 
@@ -24,23 +27,66 @@ const nullableNum = (path: string) => nullableNumberField(...fieldFor(path));
 
 const ADJUSTER_KINDS: readonly AdjusterKind[] = ['threaded', 'stepped', 'spacer'];
 
-function clickerSchema(end: EndKind, kind: (typeof CLICKER_KINDS)[number]) {
-  return object({
-    position: num(`${end}.clickers.${kind}.position`),
-    maxPosition: num(`${end}.clickers.${kind}.maxPosition`),
-  })
-    .nullable()
-    .default(null)
-    .typeError(`The ${kind} clicker must be given as its position and its clicks in all, or left out.`)
-    .test('clicker-range', function (clicker) {
-      if (!clicker || !Number.isFinite(clicker.position) || !Number.isFinite(clicker.maxPosition)) return true;
-      if (clicker.position <= clicker.maxPosition) return true;
-      return this.createError({
-        path: `${this.path}.position`,
-        message: `The ${kind} clicker is set beyond its last click: count again from fully closed.`,
-      });
-    });
+const isDamperUnit = (unit: unknown): unit is DamperUnit => (DAMPER_UNITS as readonly unknown[]).includes(unit);
+
+/** An adjuster's settings are checked once its own unit and fully-open count are valid. */
+function rangeOf(parent: unknown): Pick<DamperAdjuster, 'unit' | 'maxPosition'> | null {
+  const { unit, maxPosition } = (parent ?? {}) as Partial<DamperAdjuster>;
+  if (!isDamperUnit(unit) || typeof maxPosition !== 'number') return null;
+  if (!(maxPosition > 0 && maxPosition <= DAMPER_MAX_OPEN[unit] && isWholeStep(unit, maxPosition))) return null;
+  return { unit, maxPosition };
 }
+
+function settingTest(this: TestContext, value: number | null | undefined) {
+  const range = rangeOf(this.parent);
+  if (value === null || value === undefined || !range) return true;
+  const problem = checkDamperSetting(range, value);
+  return problem ? this.createError({ message: problem }) : true;
+}
+
+const damperSchema = object({
+  kind: string()
+    .required(`${DAMPER_FIELDS.kind.label} is missing: choose one from the list.`)
+    .matches(DAMPER_KIND_KEY, DAMPER_KIND_KEY_MESSAGE),
+  unit: mixed<DamperUnit>().required('Say whether it counts clicks or turns.').oneOf(DAMPER_UNITS, 'Count it in clicks or turns.'),
+  maxPosition: numberField(DAMPER_FIELDS.maxPosition.label, { min: 0, max: DAMPER_MAX_OPEN.clicks, aboveMin: true }, '').test('open-range', function (value) {
+    const unit = (this.parent as Partial<DamperAdjuster>).unit;
+    if (value === undefined || !isDamperUnit(unit)) return true;
+    if (value > DAMPER_MAX_OPEN[unit]) return this.createError({ message: `${DAMPER_FIELDS.maxPosition.label} is at most ${DAMPER_MAX_OPEN[unit]} ${unit} out.` });
+    if (!isWholeStep(unit, value)) {
+      return this.createError({ message: unit === 'clicks' ? 'Count fully open in whole clicks.' : 'Count fully open in quarter turns (0.25, 0.5, 0.75).' });
+    }
+    return true;
+  }),
+  standard: nullableNumberField(DAMPER_FIELDS.standard.label, { min: 0, max: DAMPER_MAX_OPEN.clicks }, '').test('standard-setting', settingTest),
+  position: numberField(DAMPER_FIELDS.position.label, { min: 0, max: DAMPER_MAX_OPEN.clicks }, '').test('setting', settingTest),
+  dampingPerStepNsPerM: nullableNumberField(DAMPER_FIELDS.dampingPerStepNsPerM.label, DAMPING_PER_STEP_RANGE, 'N s/m'),
+})
+  .default(undefined)
+  .typeError('Each damping adjuster must be given as its values.')
+  .required('Each damping adjuster must be given as its values.');
+
+/** Each kind at most once per end: a repeat is refused on its own kind. */
+const dampersSchema = array()
+  .of(damperSchema)
+  // An end sent with null for its adjusters has none.
+  .transform((value: unknown) => (value === null ? [] : value))
+  .default(() => [])
+  .typeError('The damping adjusters must be given as a list.')
+  .max(MAX_DAMPERS_PER_END, `An end has at most ${MAX_DAMPERS_PER_END} damping adjusters.`)
+  .test('one-of-each', function (list) {
+    const seen = new Set<string>();
+    const errors: ValidationError[] = [];
+    (list ?? []).forEach((damper, index) => {
+      const kind = damper?.kind;
+      if (!kind) return;
+      if (seen.has(kind)) {
+        errors.push(this.createError({ path: `${this.path}[${index}].kind`, message: `The ${kind} adjuster is listed twice: keep one.` }));
+      }
+      seen.add(kind);
+    });
+    return errors.length === 0 ? true : new ValidationError(errors);
+  });
 
 function adjusterSchema(end: EndKind) {
   const at = (field: string) => `${end}.adjuster.${field}`;
@@ -82,9 +128,7 @@ function springFields(end: EndKind) {
       .required('Spring family is missing: give the spring’s size family, e.g. F43x290.')
       .max(60, 'Spring family must be at most 60 characters.'),
     adjuster: adjusterSchema(end),
-    clickers: object({ rebound: clickerSchema(end, 'rebound'), compression: clickerSchema(end, 'compression') })
-      .default(() => ({ rebound: null, compression: null }))
-      .typeError('The clickers must be given as rebound and compression.'),
+    dampers: dampersSchema,
   };
 }
 
@@ -136,7 +180,7 @@ const isObject = (value: unknown): value is Record<string, unknown> => typeof va
 /**
  * The sizing schema's messages for the bike's fields, under the bike's paths (its `bike.` is the
  * bike's `masses.`). The ends go in as they are: the sizing schema drops what only the garage keeps
- * (clickers, the adjuster's zero), and reads a null as left out, except the linkage list's.
+ * (damping adjusters, the adjuster's zero), and reads a null as left out, except the linkage list's.
  */
 export function checkSizeable(spec: { masses?: unknown; front?: unknown; rear?: unknown }): Record<string, string> {
   const rear = isObject(spec.rear) ? { ...spec.rear, linkage: spec.rear.linkage ?? undefined } : spec.rear;

@@ -1,10 +1,13 @@
 /**
  * A change the rider reports in the setup log (POST /api/bikes/:id/setup-log): per end a new preload
- * setting, new clicker positions, a spring swap. Whether the bike can take it (the adjuster's range,
- * the clickers it has) is checked against the bike by `applySetupChange` (shared/setup/settings.ts).
+ * setting, new damping adjuster settings by kind, a spring swap. Whether the bike can take it (the
+ * adjusters' ranges and steps, the adjusters it has) is checked against the bike by
+ * `applySetupChange` (shared/setup/settings.ts).
  */
 
-import { object, string } from 'yup';
+import { mixed, object, string, ValidationError } from 'yup';
+import { DAMPER_MAX_OPEN, MAX_DAMPERS_PER_END } from './bike.fields';
+import { DAMPER_KIND_KEY, DAMPER_KIND_KEY_MESSAGE } from './damper-kind.schema';
 import { nullableNumberField, numberField, optionalNumberField } from './number-field';
 
 const springSwapSchema = object({
@@ -25,18 +28,39 @@ const springSwapSchema = object({
     });
   });
 
+const isPlainObject = (value: unknown): value is Record<string, unknown> => typeof value === 'object' && value !== null && !Array.isArray(value);
+
+/** Kind -> new setting. Each setting is a number in range here; against the bike's own adjuster in applySetupChange. */
+const damperSettingsSchema = mixed<Record<string, number>>()
+  .optional()
+  .test('damper-settings', function (value) {
+    if (value === undefined) return true;
+    if (!isPlainObject(value)) return this.createError({ message: 'Give the damping adjusters as { kind: setting }, e.g. { "rebound": 12 }.' });
+    const entries = Object.entries(value);
+    if (entries.length > MAX_DAMPERS_PER_END) return this.createError({ message: `An end has at most ${MAX_DAMPERS_PER_END} damping adjusters.` });
+    const errors = entries.flatMap(([kind, setting]) => {
+      const at = (message: string) => [this.createError({ path: `${this.path}.${kind}`, message })];
+      if (!DAMPER_KIND_KEY.test(kind)) return at(DAMPER_KIND_KEY_MESSAGE);
+      if (typeof setting !== 'number' || !Number.isFinite(setting)) return at('The setting must be a number, out from fully closed.');
+      if (setting < 0 || setting > DAMPER_MAX_OPEN.clicks) return at(`The setting must be between 0 and ${DAMPER_MAX_OPEN.clicks}, out from fully closed.`);
+      return [];
+    });
+    return errors.length === 0 ? true : new ValidationError(errors);
+  });
+
 function endChangeSchema(part: string) {
   return object({
     preloadPosition: optionalNumberField('Preload adjuster setting', { min: -1000, max: 1000 }, ''),
-    rebound: optionalNumberField('Rebound clicker', { min: 0, max: 100, integer: true }, 'clicks'),
-    compression: optionalNumberField('Compression clicker', { min: 0, max: 100, integer: true }, 'clicks'),
+    dampers: damperSettingsSchema,
     spring: springSwapSchema,
   })
     .default(undefined)
     .typeError(`The ${part} change must be given as its new settings.`);
 }
 
-const hasChange = (end: Record<string, unknown> | undefined) => !!end && Object.values(end).some((v) => v !== undefined);
+/** An empty list of damper settings changes nothing. */
+const hasChange = (end: Record<string, unknown> | undefined) =>
+  !!end && Object.entries(end).some(([key, v]) => v !== undefined && !(key === 'dampers' && isPlainObject(v) && Object.keys(v).length === 0));
 
 export const setupChangeSchema = object({
   note: string().trim().max(500, 'Keep the note to 500 characters.').default(''),
@@ -46,7 +70,7 @@ export const setupChangeSchema = object({
   .typeError('Send the change as { front, rear, note }.')
   .test('some-change', function (change) {
   if (!change || hasChange(change.front) || hasChange(change.rear)) return true;
-  return this.createError({ path: '', message: 'Say what changed: a preload setting, a clicker or a spring, at the front or the rear.' });
+  return this.createError({ path: '', message: 'Say what changed: a preload setting, a damping adjuster or a spring, at the front or the rear.' });
 });
 
 /** POST /api/bikes/:id/load-case: the case to set by its name, or null to ride solo. */

@@ -127,12 +127,12 @@ export function checkEngineSettings(input: unknown, stored: readonly StoredSetti
   return Object.keys(fields).length === 0 ? { ok: true, values } : { ok: false, fields };
 }
 
-export const AUDIT_ENTITIES = ['bike-model', 'target-profile', 'engine-setting', 'shop-settings'] as const;
+export const AUDIT_ENTITIES = ['bike-model', 'target-profile', 'engine-setting', 'shop-settings', 'damper-kind', 'damping-rule'] as const;
 
 export type AuditEntity = (typeof AUDIT_ENTITIES)[number];
 
 export const auditQuerySchema = object({
-  entity: mixed<AuditEntity>().optional().oneOf([...AUDIT_ENTITIES, undefined], 'Choose bike-model, target-profile, engine-setting or shop-settings.'),
+  entity: mixed<AuditEntity>().optional().oneOf([...AUDIT_ENTITIES, undefined], 'Choose bike-model, target-profile, engine-setting, shop-settings, damper-kind or damping-rule.'),
   page: number().integer().min(1).default(1).typeError('The page must be a whole number.'),
   pageSize: number().integer().min(1).max(100).default(50).typeError('The page size must be a whole number up to 100.'),
 });

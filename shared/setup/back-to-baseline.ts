@@ -1,17 +1,19 @@
 /**
  * Back to baseline: per adjuster, what to turn and which way to undo every change since the
  * baseline. Preload goes back in the adjuster's own units, the direction in words from the bike's
- * "which way adds preload"; clickers go back by clicks (counted out from fully closed); springs go
- * back to the baseline's rates. The order of work is springs, then preload, then clickers, since a
- * spring is swapped with the preload backed off.
+ * "which way adds preload"; damping adjusters go back in their clicks or turns (counted out from
+ * fully closed); springs go back to the baseline's rates. The order of work is springs, then
+ * preload, then damping, since a spring is swapped with the preload backed off.
  */
 
-import type { ClickerKind, PreloadAdjuster, PreloadDirection } from '../types/bike';
+import type { PreloadAdjuster, PreloadDirection } from '../types/bike';
+import type { DamperUnit } from '../types/damping';
 import type { EndKind } from '../types/sizing';
-import type { BackToBaseline, ClickerUndo, EndSettings, EndUndo, PreloadUndo, PreloadWay, SetupSettings, SpringSetting, SpringUndo } from '../types/setup-log';
+import type { BackToBaseline, DamperUndo, EndSettings, EndUndo, PreloadUndo, PreloadWay, SetupSettings, SpringSetting, SpringUndo } from '../types/setup-log';
 import { adjusterUnit } from '../sizing/adjuster';
 import { formatNumber } from '../sizing/format';
-import { isSameSpring, springOf } from './settings';
+import { damperAmount, damperName, type DamperLabels } from './damper-words';
+import { damperUnitFor, isSameSpring, springOf, type DamperUnits } from './settings';
 
 const ENDS: readonly EndKind[] = ['front', 'rear'];
 const END_NAME: Record<EndKind, string> = { front: 'Front', rear: 'Rear' };
@@ -81,37 +83,52 @@ function undoPreload(end: EndKind, baseline: EndSettings, current: EndSettings, 
   };
 }
 
-function undoClicker(end: EndKind, kind: ClickerKind, baseline: number, current: number): ClickerUndo | null {
-  const clicks = baseline - current;
-  if (clicks === 0) return null;
-  const amount = Math.abs(clicks);
-  const direction = clicks > 0 ? 'out' : 'in';
+function undoDamper(end: EndKind, kind: string, unit: DamperUnit, baseline: number, current: number, labels: DamperLabels): DamperUndo | null {
+  // Positive is out from fully closed; quarter turns added up leave float noise.
+  const change = tidy(baseline - current);
+  if (change === 0) return null;
+  const amount = Math.abs(change);
+  const direction = change > 0 ? 'out' : 'in';
   return {
-    clicker: kind,
-    fromPosition: current,
-    toPosition: baseline,
-    clicks,
+    adjuster: kind,
+    unit,
+    from: current,
+    to: baseline,
     amount,
     direction,
-    instruction: `${END_NAME[end]} ${kind}: ${amount} ${plural(amount, 'click', 'clicks')} ${direction}, back to ${baseline} out from fully closed.`,
+    instruction: `${END_NAME[end]} ${damperName(kind, labels)}: ${damperAmount(unit, amount)} ${direction}, back to ${formatNumber(baseline, 2)} out from fully closed.`,
   };
 }
 
-function undoEnd(end: EndKind, baseline: EndSettings, current: EndSettings, adjuster: PreloadAdjuster, notes: string[]): EndUndo {
-  const clickers: ClickerUndo[] = [];
-  for (const kind of ['rebound', 'compression'] as const) {
-    const was = baseline[kind];
-    const is = current[kind];
-    if (was !== null && is !== null) {
-      const undo = undoClicker(end, kind, was, is);
-      if (undo) clickers.push(undo);
-    } else if (was !== is) {
-      notes.push(`The ${PART[end]}'s ${kind} clicker was ${was === null ? 'added' : 'removed'} since the baseline: set it by hand.`);
+function undoDampers(end: EndKind, baseline: EndSettings, current: EndSettings, options: DamperWords, notes: string[]): DamperUndo[] {
+  const { units = {}, labels = {} } = options;
+  const undone: DamperUndo[] = [];
+  for (const [kind, is] of Object.entries(current.dampers)) {
+    const was = baseline.dampers[kind];
+    if (was === undefined) {
+      notes.push(`The ${PART[end]}'s ${damperName(kind, labels)} adjuster was added since the baseline: set it by hand.`);
+      continue;
     }
+    const undo = undoDamper(end, kind, damperUnitFor(units, end, kind, [was, is]), was, is, labels);
+    if (undo) undone.push(undo);
   }
+  for (const kind of Object.keys(baseline.dampers)) {
+    if (!(kind in current.dampers)) notes.push(`The ${PART[end]}'s ${damperName(kind, labels)} adjuster was removed since the baseline: set it by hand.`);
+  }
+  return undone;
+}
+
+function undoEnd(end: EndKind, baseline: EndSettings, current: EndSettings, adjuster: PreloadAdjuster, options: DamperWords, notes: string[]): EndUndo {
+  const dampers = undoDampers(end, baseline, current, options, notes);
   const spring = undoSpring(end, baseline, current);
   const preload = undoPreload(end, baseline, current, adjuster);
-  return { end, atBaseline: !spring && !preload && clickers.length === 0, spring, preload, clickers };
+  return { end, atBaseline: !spring && !preload && dampers.length === 0, spring, preload, dampers };
+}
+
+/** How the damping adjusters are counted (the bike's now, `damperUnitsOf`) and named (the shop's list; else their keys). */
+export interface DamperWords {
+  units?: DamperUnits;
+  labels?: DamperLabels;
 }
 
 /**
@@ -122,6 +139,7 @@ export function planBackToBaseline(
   baseline: SetupSettings,
   current: SetupSettings,
   adjusters: Partial<Record<EndKind, PreloadAdjuster>>,
+  dampers: DamperWords = {},
 ): BackToBaseline {
   const notes: string[] = [];
   const undone: Partial<Record<EndKind, EndUndo>> = {};
@@ -129,15 +147,15 @@ export function planBackToBaseline(
     const was = baseline[end];
     const is = current[end];
     const adjuster = adjusters[end];
-    if (was && is && adjuster) undone[end] = undoEnd(end, was, is, adjuster, notes);
+    if (was && is && adjuster) undone[end] = undoEnd(end, was, is, adjuster, dampers, notes);
     else if (was && !is) notes.push(`The bike has no ${PART[end]} recorded now, so the baseline's ${PART[end]} settings cannot be restored here.`);
     else if (!was && is) notes.push(`The ${PART[end]} was added to the bike after the baseline: it has no baseline to go back to.`);
   }
-  const ends = ENDS.map((end) => undone[end]).filter((u): u is EndUndo => u !== undefined);
+  const plans = ENDS.map((end) => undone[end]).filter((u): u is EndUndo => u !== undefined);
   const steps = [
-    ...ends.flatMap((u) => (u.spring ? [u.spring.instruction] : [])),
-    ...ends.flatMap((u) => (u.preload ? [u.preload.instruction] : [])),
-    ...ends.flatMap((u) => u.clickers.map((c) => c.instruction)),
+    ...plans.flatMap((u) => (u.spring ? [u.spring.instruction] : [])),
+    ...plans.flatMap((u) => (u.preload ? [u.preload.instruction] : [])),
+    ...plans.flatMap((u) => u.dampers.map((d) => d.instruction)),
   ];
   return {
     atBaseline: steps.length === 0,

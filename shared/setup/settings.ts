@@ -1,12 +1,15 @@
 /**
- * The settings a person changes on a bike (springs, preload adjuster, clickers): read from the bike,
- * compared between two moments, and changed as the rider reports it in the setup log.
+ * The settings a person changes on a bike (springs, preload adjuster, damping adjusters): read from
+ * the bike, compared between two moments, and changed as the rider reports it in the setup log.
  */
 
+import { checkDamperSetting, isWholeStep } from '../damping/adjuster-range';
 import type { BikeSpec, FrontSpec, RearSpec } from '../types/bike';
+import type { DamperUnit } from '../types/damping';
 import type { EndKind } from '../types/sizing';
 import type { EndChangeInput, EndSettings, SettingChange, SetupChangeInput, SetupSettings, SpringSetting } from '../types/setup-log';
 import { formatNumber } from '../sizing/format';
+import { damperName } from './damper-words';
 
 const ENDS: readonly EndKind[] = ['front', 'rear'];
 
@@ -23,8 +26,7 @@ export function endSettingsOf(spec: FrontSpec | RearSpec): EndSettings {
     family: spec.family,
     preloadMm: spec.preloadMm,
     preloadPosition: spec.adjuster.position,
-    rebound: spec.clickers.rebound?.position ?? null,
-    compression: spec.clickers.compression?.position ?? null,
+    dampers: Object.fromEntries(spec.dampers.map((damper) => [damper.kind, damper.position])),
   };
 }
 
@@ -40,8 +42,40 @@ export function isSameSpring(a: SpringSetting, b: SpringSetting): boolean {
   return a.rateNmm === b.rateNmm && a.secondRateNmm === b.secondRateNmm && a.breakMm === b.breakMm && a.family === b.family;
 }
 
-/** One change per setting that differs, front before rear. */
-export function diffSettings(before: SetupSettings, after: SetupSettings): SettingChange[] {
+/** Per end, each damping adjuster's unit by its kind: the settings hold positions only. */
+export type DamperUnits = Partial<Record<EndKind, Readonly<Record<string, DamperUnit>>>>;
+
+export function damperUnitsOf(bike: Pick<BikeSpec, 'front' | 'rear'>): DamperUnits {
+  const units: DamperUnits = {};
+  for (const end of ENDS) {
+    const spec = bike[end];
+    if (spec) units[end] = Object.fromEntries(spec.dampers.map((damper) => [damper.kind, damper.unit]));
+  }
+  return units;
+}
+
+/** An adjuster no longer on the bike has no unit to look up: a part turn says turns, whole numbers are read as clicks. */
+export function damperUnitFor(units: DamperUnits, end: EndKind, kind: string, values: (number | null)[]): DamperUnit {
+  const known = units[end]?.[kind];
+  if (known) return known;
+  return values.every((value) => value === null || isWholeStep('clicks', value)) ? 'clicks' : 'turns';
+}
+
+function diffDampers(end: EndKind, from: EndSettings, to: EndSettings, units: DamperUnits): SettingChange[] {
+  const kinds = [...new Set([...Object.keys(from.dampers), ...Object.keys(to.dampers)])];
+  return kinds.flatMap((kind): SettingChange[] => {
+    const was = from.dampers[kind] ?? null;
+    const is = to.dampers[kind] ?? null;
+    if (was === is) return [];
+    return [{ end, setting: 'damper', adjuster: kind, unit: damperUnitFor(units, end, kind, [was, is]), from: was, to: is }];
+  });
+}
+
+/**
+ * One change per setting that differs, front before rear; damping adjusters in the order the bike
+ * lists them. `units` names each adjuster's unit (the bike's as it is now, `damperUnitsOf`).
+ */
+export function diffSettings(before: SetupSettings, after: SetupSettings, units: DamperUnits = {}): SettingChange[] {
   const changes: SettingChange[] = [];
   for (const end of ENDS) {
     const from = before[end];
@@ -51,8 +85,7 @@ export function diffSettings(before: SetupSettings, after: SetupSettings): Setti
     if (from.preloadPosition !== to.preloadPosition || from.preloadMm !== to.preloadMm) {
       changes.push({ end, setting: 'preload', from: from.preloadPosition, to: to.preloadPosition, fromMm: from.preloadMm, toMm: to.preloadMm });
     }
-    if (from.rebound !== to.rebound) changes.push({ end, setting: 'rebound', from: from.rebound, to: to.rebound });
-    if (from.compression !== to.compression) changes.push({ end, setting: 'compression', from: from.compression, to: to.compression });
+    changes.push(...diffDampers(end, from, to, units));
   }
   return changes;
 }
@@ -62,7 +95,7 @@ export type ChangeOutcome = { ok: true; bike: BikeSpec } | { ok: false; fields: 
 const PART: Record<EndKind, string> = { front: 'fork', rear: 'shock' };
 
 function applyEndChange<S extends FrontSpec | RearSpec>(end: EndKind, spec: S, change: EndChangeInput, fields: Record<string, string>): S {
-  const next: S = { ...spec, adjuster: { ...spec.adjuster }, clickers: { ...spec.clickers } };
+  const next: S = { ...spec, adjuster: { ...spec.adjuster }, dampers: spec.dampers.map((damper) => ({ ...damper })) };
   if (change.spring) {
     next.rateNmm = change.spring.rateNmm;
     next.family = change.spring.family ?? spec.family;
@@ -83,22 +116,21 @@ function applyEndChange<S extends FrontSpec | RearSpec>(end: EndKind, spec: S, c
   if (next.preloadMm < 0) {
     fields[`${end}.preloadPosition`] ??= `That setting leaves the ${PART[end]} spring with less than no preload: check the setting and the spring's preload.`;
   }
-  for (const kind of ['rebound', 'compression'] as const) {
-    const position = change[kind];
-    if (position === undefined) continue;
-    const clicker = spec.clickers[kind];
-    if (!clicker) {
-      fields[`${end}.${kind}`] = `The ${PART[end]} has no ${kind} clicker recorded: add it to the bike first.`;
-    } else if (position > clicker.maxPosition) {
-      fields[`${end}.${kind}`] = `The ${kind} clicker has ${clicker.maxPosition} clicks: count again from fully closed.`;
-    } else {
-      next.clickers[kind] = { ...clicker, position };
-    }
+  for (const [kind, position] of Object.entries(change.dampers ?? {})) {
+    const damper = next.dampers.find((d) => d.kind === kind);
+    const problem = damper
+      ? checkDamperSetting(damper, position)
+      : `The ${PART[end]} has no ${damperName(kind)} adjuster recorded: add it to the bike first.`;
+    if (problem) fields[`${end}.dampers.${kind}`] = problem;
+    else if (damper) damper.position = position;
   }
   return next;
 }
 
-/** The bike after the change, or a message per field the bike cannot take (a setting beyond the adjuster's range). */
+/**
+ * The bike after the change, or a message per field the bike cannot take: a setting beyond an
+ * adjuster's range or between its steps, an adjuster the end does not have.
+ */
 export function applySetupChange(bike: BikeSpec, change: SetupChangeInput): ChangeOutcome {
   const fields: Record<string, string> = {};
   const next: BikeSpec = { ...bike };

@@ -1,10 +1,11 @@
 /**
  * A bike as the garage and the shop's model catalogue store it. The fields of `masses`, `front`
  * and `rear` are those of the sizing request (`bike`, `front`, `rear` of POST /api/sizing), one to
- * one, plus what only the rider needs: the adjusters' zero and turning direction, and the clickers.
- * SI throughout: mm, kg, N, N/mm.
+ * one, plus what only the rider needs: the adjusters' zero and turning direction, and the damping
+ * adjusters. SI throughout: mm, kg, N, N/mm; damping adjusters in their own clicks or turns.
  */
 
+import type { DamperAdjuster } from './damping';
 import type { Adjuster, BikeMasses, EndKind, LinkagePoint } from './sizing';
 
 /** Which way of working the preload adjuster adds preload. */
@@ -18,18 +19,6 @@ export interface PreloadAdjuster extends Adjuster {
   addsPreload: PreloadDirection;
 }
 
-/** A damping clicker; positions are counted in clicks out from fully closed (0 = closed). */
-export interface Clicker {
-  position: number;
-  maxPosition: number;
-}
-
-export const CLICKER_KINDS = ['rebound', 'compression'] as const;
-
-export type ClickerKind = (typeof CLICKER_KINDS)[number];
-
-export type Clickers = Record<ClickerKind, Clicker | null>;
-
 interface EndSpecCommon {
   rateNmm: number;
   /** Dual-rate spring: the rate above breakMm; both null for a single-rate spring. */
@@ -38,7 +27,8 @@ interface EndSpecCommon {
   preloadMm: number;
   family: string;
   adjuster: PreloadAdjuster;
-  clickers: Clickers;
+  /** The end's damping adjusters, each kind at most once; empty when it has none. */
+  dampers: DamperAdjuster[];
 }
 
 export interface FrontSpec extends EndSpecCommon {

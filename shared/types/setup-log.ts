@@ -1,10 +1,11 @@
 /**
  * The setup log of one bike: every saved pass and every change to its springs, preload and
- * clickers, with the settings before and after; and the plan that undoes everything back to the
- * baseline (the settings before the first entry).
+ * damping adjusters, with the settings before and after; and the plan that undoes everything back
+ * to the baseline (the settings before the first entry).
  */
 
-import type { ClickerKind, PreloadDirection } from './bike';
+import type { PreloadDirection } from './bike';
+import type { DamperUnit } from './damping';
 import type { SizingRecordSummary } from './garage';
 import type { AdjusterUnit, EndKind } from './sizing';
 
@@ -15,14 +16,13 @@ export interface SpringSetting {
   family: string;
 }
 
-/** What a person changes on one end with a spanner: the spring, the preload adjuster, the clickers. */
+/** What a person changes on one end with a spanner: the spring, the preload adjuster, the damping adjusters. */
 export interface EndSettings extends SpringSetting {
   preloadMm: number;
   /** The preload adjuster's setting, in its units (turns, steps, spacer mm) from its zero. */
   preloadPosition: number;
-  /** Clicks out from fully closed; null without that clicker. */
-  rebound: number | null;
-  compression: number | null;
+  /** Each damping adjuster's setting by its kind, out from fully closed in its own unit; an adjuster the end lacks is absent. */
+  dampers: Record<string, number>;
 }
 
 export interface SetupSettings {
@@ -33,7 +33,11 @@ export interface SetupSettings {
 export type SettingChange =
   | { end: EndKind; setting: 'spring'; from: SpringSetting; to: SpringSetting }
   | { end: EndKind; setting: 'preload'; from: number; to: number; fromMm: number; toMm: number }
-  | { end: EndKind; setting: ClickerKind; from: number | null; to: number | null };
+  /**
+   * A null side: the adjuster was not on the bike then. `unit` is the adjuster's unit on the bike
+   * now; for one gone from it, turns when a setting is a part turn, else clicks.
+   */
+  | { end: EndKind; setting: 'damper'; adjuster: string; unit: DamperUnit; from: number | null; to: number | null };
 
 export const SETUP_ENTRY_KINDS = ['pass', 'change'] as const;
 
@@ -76,8 +80,8 @@ export interface SpringSwapInput {
 
 export interface EndChangeInput {
   preloadPosition?: number;
-  rebound?: number;
-  compression?: number;
+  /** Kind -> new setting, out from fully closed in the adjuster's unit. */
+  dampers?: Record<string, number>;
   spring?: SpringSwapInput;
 }
 
@@ -103,13 +107,15 @@ export interface PreloadUndo {
   instruction: string;
 }
 
-export interface ClickerUndo {
-  clicker: ClickerKind;
-  fromPosition: number;
-  toPosition: number;
-  /** Signed: positive is clicks out (less damping). */
-  clicks: number;
+export interface DamperUndo {
+  /** The adjuster's kind. */
+  adjuster: string;
+  unit: DamperUnit;
+  from: number;
+  to: number;
+  /** How far to turn, in `unit`. */
   amount: number;
+  /** Out is less damping. */
   direction: 'in' | 'out';
   instruction: string;
 }
@@ -125,7 +131,7 @@ export interface EndUndo {
   atBaseline: boolean;
   spring: SpringUndo | null;
   preload: PreloadUndo | null;
-  clickers: ClickerUndo[];
+  dampers: DamperUndo[];
 }
 
 /** GET /api/bikes/:id/setup-log/back-to-baseline. */
@@ -133,7 +139,7 @@ export interface BackToBaseline {
   atBaseline: boolean;
   front: EndUndo | null;
   rear: EndUndo | null;
-  /** The instructions in working order: springs first (preload backed off), then preload, then clickers. */
+  /** The instructions in working order: springs first (preload backed off), then preload, then damping adjusters. */
   steps: string[];
   /** What the plan cannot undo, e.g. an end added to the bike since the baseline. */
   notes: string[];

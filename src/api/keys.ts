@@ -33,6 +33,7 @@ export const riderKeys = {
   bikeModels: '/bike-models',
   bikeModel: (id: number) => `/bike-models/${id}`,
   targetProfiles: '/target-profiles',
+  damperKinds: '/damper-kinds',
 } as const;
 
 /** The parts counter: the spring catalogue, its stock and its imports. */
@@ -73,4 +74,26 @@ export const deskKeys = {
   quote: (id: number) => `/quotes/${id}`,
   springOptions: (id: number) => `/quotes/${id}/spring-options`,
   customerQuote: (token: string) => `/customer-quotes/${encodeURIComponent(token)}`,
+} as const;
+
+/** The test-ride loop's symptom-to-change table (desk and admin). */
+export const dampingRuleKeys = {
+  rules: '/damping-rules',
+  rule: (id: number) => `/damping-rules/${id}`,
+} as const;
+
+/**
+ * The test-ride loop of one bike and its damping adjusters' way back to the maker's standard or the
+ * baseline. Staff work a customer's bike through the same paths: the server checks ownership.
+ */
+export const testRideKeys = {
+  rides: (bikeId: number) => `/bikes/${bikeId}/test-rides`,
+  made: (rideId: number) => `/test-rides/${rideId}/made`,
+  outcome: (rideId: number) => `/test-rides/${rideId}/outcome`,
+  undo: (rideId: number) => `/test-rides/${rideId}/undo`,
+  damperPlans: (bikeId: number) => `/bikes/${bikeId}/damper-plans`,
+  /** `target` is 'standard' or 'baseline'. */
+  applyDamperPlan: (bikeId: number, target: string) => `/bikes/${bikeId}/damper-plans/${target}`,
+  /** The desk's lists of a customer's bikes, which show the settings a change moves. */
+  isCustomerBikes: (key: unknown) => typeof key === 'string' && key.startsWith(`${riderKeys.bikes}?riderId=`),
 } as const;

@@ -9,6 +9,7 @@ const AREA_ITEMS: Record<Area, readonly NavItem[]> = {
   desk: [
     { href: '/desk', label: 'Quotes' },
     { href: '/desk/customers', label: 'Customers' },
+    { href: '/desk/damping-rules', label: 'Damping rules' },
   ],
   counter: [
     { href: '/counter', label: 'Catalogue' },

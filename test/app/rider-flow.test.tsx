@@ -24,7 +24,7 @@ const REAR = {
   preloadMm: 10,
   family: 'shock',
   adjuster: { kind: 'stepped', mmPerUnit: 2.5, position: 2, maxPosition: 6, zeroReference: '', addsPreload: 'clockwise' },
-  clickers: { rebound: null, compression: null },
+  dampers: [],
 };
 
 const BIKE = {

@@ -16,7 +16,7 @@ import { startLiveAppForFile } from './live-app';
 /** What each role's navigation offers and the heading of the area it lands on. */
 const AREAS = {
   rider: { heading: 'Garage', nav: ['Garage'] },
-  desk: { heading: 'Quotes', nav: ['Quotes', 'Customers'] },
+  desk: { heading: 'Quotes', nav: ['Quotes', 'Customers', 'Damping rules'] },
   counter: { heading: 'Spring catalogue', nav: ['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify'] },
   admin: { heading: 'Shop', nav: ['Shop', 'Users', 'Outbox', 'Shop data', 'Service desk', 'Parts counter'] },
 } as const;

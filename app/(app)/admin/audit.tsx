@@ -6,13 +6,17 @@ import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
+import { ChipChoice } from '@/components/catalogue/chip-choice';
 import { formatMoney } from '@/components/catalogue/money';
+import { describeKind } from '@/components/damping-rules/damper-kinds-panel';
+import { describeRuleAudit } from '@/components/damping-rules/rule-audit';
 import { ShopDataLinks } from '@/components/garage/shop-data-links';
 import { Screen } from '@/components/ui/screen';
-import { SegmentedChoice } from '@/components/ui/segmented-choice';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useAudit } from '@/hooks/use-audit';
+import { useDamperKinds } from '@/hooks/use-damper-kinds';
 import { useTheme } from '@/theme';
+import type { DamperKind } from '@shared/types/damping';
 import type { AuditEntry } from '@shared/types/shop-data';
 import type { ShopSettingsView } from '@shared/types/quote';
 
@@ -22,6 +26,8 @@ const ENTITIES = [
   { value: 'target-profile', label: 'Profiles' },
   { value: 'engine-setting', label: 'Settings' },
   { value: 'shop-settings', label: 'Shop settings' },
+  { value: 'damper-kind', label: 'Adjuster kinds' },
+  { value: 'damping-rule', label: 'Damping rules' },
 ] as const;
 
 type EntityChoice = (typeof ENTITIES)[number]['value'];
@@ -58,11 +64,29 @@ function describeTermsChange(entry: AuditEntry): string[] {
   });
 }
 
+/** The lines under an entry: what changed, for the entities whose rows say it in words. */
+function describeEntry(entry: AuditEntry, kinds: readonly DamperKind[]): string[] {
+  switch (entry.entity) {
+    case 'shop-settings':
+      return describeTermsChange(entry);
+    case 'damping-rule':
+      return describeRuleAudit(entry.before, entry.after, kinds);
+    case 'damper-kind': {
+      const kind = entry.after as DamperKind | null;
+      return kind ? [`${kind.label}: ${describeKind(kind)}`] : [];
+    }
+    default:
+      return [];
+  }
+}
+
 const ENTITY_NAMES: Record<AuditEntry['entity'], (key: string) => string> = {
   'bike-model': (key) => `Bike model ${key}`,
   'target-profile': (key) => `Target profile ${key}`,
   'engine-setting': (key) => `Engine setting ${key}`,
   'shop-settings': () => 'Shop settings',
+  'damper-kind': (key) => `Adjuster kind ${key}`,
+  'damping-rule': (key) => `Damping rule ${key}`,
 };
 
 /** Who changed which shop data, when. */
@@ -71,12 +95,14 @@ export default function AuditScreen() {
   const [entity, setEntity] = useState<EntityChoice>('all');
   const [page, setPage] = useState(1);
   const { data, error, mutate } = useAudit(entity === 'all' ? undefined : entity, page);
+  // Until the list loads (or if it cannot), adjusters read as the trade's labels or their keys.
+  const kinds = useDamperKinds().data?.kinds ?? [];
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   return (
     <Screen>
       <ThemedText type="title">Audit</ThemedText>
       <ShopDataLinks current="/admin/audit" />
-      <SegmentedChoice
+      <ChipChoice
         label="What was edited"
         options={ENTITIES}
         value={entity}
@@ -90,7 +116,7 @@ export default function AuditScreen() {
       ) : !data ? (
         <LoadingState label="Loading the audit…" />
       ) : data.entries.length === 0 ? (
-        <EmptyState title="Nothing edited yet">Edits to bike models, target profiles, engine settings and the shop settings are listed here.</EmptyState>
+        <EmptyState title="Nothing edited yet">Edits to bike models, target profiles, engine settings, the shop settings, the adjuster kinds and the damping rules are listed here.</EmptyState>
       ) : (
         <View style={{ gap: spacing.sm }}>
           {data.entries.map((entry) => (
@@ -101,9 +127,9 @@ export default function AuditScreen() {
               <ThemedText color="textMuted">
                 {entry.actorName} · {new Date(entry.at).toLocaleString()}
               </ThemedText>
-              {entry.entity === 'shop-settings'
-                ? describeTermsChange(entry).map((line) => <ThemedText key={line}>{line}</ThemedText>)
-                : null}
+              {describeEntry(entry, kinds).map((line) => (
+                <ThemedText key={line}>{line}</ThemedText>
+              ))}
             </Card>
           ))}
           <View style={{ flexDirection: 'row', alignItems: 'center', gap: spacing.sm }}>

@@ -53,5 +53,6 @@ export function ChipChoice<T extends string>({ label, options, value, onChange }
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap' },
-  chip: { alignItems: 'center', justifyContent: 'center', borderWidth: 2 },
+  // A label longer than the row wraps inside its chip instead of running past the container.
+  chip: { alignItems: 'center', justifyContent: 'center', borderWidth: 2, maxWidth: '100%' },
 });

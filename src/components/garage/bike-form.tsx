@@ -18,6 +18,7 @@ import type { EndKind } from '@shared/types/sizing';
 import { useTheme } from '@/theme';
 
 import { BikeValueField } from './bike-value-field';
+import { DamperFields } from './damper-fields';
 import { FIELD_GROUPS, formToSpec, RIDER_CHANGE_PATHS, specToForm, toFormErrors, type BikeFormValues } from './bike-values';
 
 export type BikeFormProps = {
@@ -44,11 +45,14 @@ const GROUP_TITLES: Record<string, string> = {
   frontGeometry: 'Fork',
   frontSpring: 'Fork spring',
   frontAdjuster: 'Fork preload adjuster',
-  frontClickers: 'Fork clickers (clicks out from closed; leave empty if none)',
   rearGeometry: 'Shock and travel',
   rearSpring: 'Shock spring',
   rearAdjuster: 'Shock preload adjuster',
-  rearClickers: 'Shock clickers (clicks out from closed; leave empty if none)',
+};
+
+const DAMPER_TITLES: Record<EndKind, string> = {
+  front: 'Fork damping adjusters (counted out from fully closed)',
+  rear: 'Shock damping adjusters (counted out from fully closed)',
 };
 
 const YES_NO = [
@@ -125,9 +129,13 @@ export function BikeForm({ spec, nickname, model, fromModel = false, submitLabel
                 </ThemedText>
                 {(['front', 'rear'] as const)
                   .filter((end) => values[end === 'front' ? 'hasFront' : 'hasRear'])
-                  .flatMap((end) => RIDER_CHANGE_PATHS(end))
-                  .map((path) => (
-                    <BikeValueField key={path} path={path} />
+                  .map((end) => (
+                    <View key={end} style={{ gap: spacing.md }}>
+                      {RIDER_CHANGE_PATHS(end).map((path) => (
+                        <BikeValueField key={path} path={path} />
+                      ))}
+                      <DamperFields end={end} mode="settings" />
+                    </View>
                   ))}
               </Card>
             )}
@@ -150,19 +158,29 @@ export function BikeForm({ spec, nickname, model, fromModel = false, submitLabel
                   <Card key={end}>
                     <ThemedText type="heading">{end === 'front' ? 'Front' : 'Rear'}</ThemedText>
                     {endSwitch(end)}
-                    {values[end === 'front' ? 'hasFront' : 'hasRear'] &&
-                      groups(end).map((group) => (
-                        <View key={group} style={{ gap: spacing.md }}>
+                    {values[end === 'front' ? 'hasFront' : 'hasRear'] && (
+                      <>
+                        {groups(end).map((group) => (
+                          <View key={group} style={{ gap: spacing.md }}>
+                            <ThemedText type="overline" color="textMuted">
+                              {GROUP_TITLES[group]}
+                            </ThemedText>
+                            {FIELD_GROUPS[group]
+                              .filter((path) => !fromModel || !RIDER_CHANGE_PATHS(end).includes(path))
+                              .map((path) => (
+                                <BikeValueField key={path} path={path} />
+                              ))}
+                          </View>
+                        ))}
+                        <View style={{ gap: spacing.md }}>
                           <ThemedText type="overline" color="textMuted">
-                            {GROUP_TITLES[group]}
+                            {DAMPER_TITLES[end]}
                           </ThemedText>
-                          {FIELD_GROUPS[group]
-                            .filter((path) => !fromModel || !RIDER_CHANGE_PATHS(end).includes(path))
-                            .map((path) => (
-                              <BikeValueField key={path} path={path} />
-                            ))}
+                          {/* From a model the settings are above, under the rider's changes. */}
+                          <DamperFields end={end} mode={fromModel ? 'spec' : 'all'} />
                         </View>
-                      ))}
+                      </>
+                    )}
                   </Card>
                 ))}
               </>

@@ -1,6 +1,7 @@
 /**
  * A bike's values as the garage's form holds them: text in the person's units, shaped like the
- * bike's JSON; and back to SI for the shared schema and the API. Paths are those of bike.fields.ts.
+ * bike's JSON; and back to SI for the shared schema and the API. Paths are those of bike.fields.ts;
+ * each end's damping adjusters are a list of rows (`front.dampers[1].position`), settings as typed.
  */
 import { getIn, setIn } from 'formik';
 import type { ValidationError } from 'yup';
@@ -8,6 +9,7 @@ import type { ValidationError } from 'yup';
 import { bikeField, type FieldQuantity } from '@shared/schemas/bike.fields';
 import { formatNumber } from '@shared/sizing/format';
 import type { BikeSpec } from '@shared/types/bike';
+import type { DamperAdjuster, DamperUnit } from '@shared/types/damping';
 import type { DisplayUnits } from '@shared/types/garage';
 import type { EndKind } from '@shared/types/sizing';
 import { parseUserNumber } from '@shared/units';
@@ -21,9 +23,6 @@ export type BikeFormValues = Record<string, unknown> & {
 };
 
 const MASS_PATHS = ['masses.massKg', 'masses.frontShare', 'masses.unsprungFrontKg', 'masses.unsprungRearKg'];
-
-const CLICKER_PATHS = (end: EndKind) =>
-  ['rebound', 'compression'].flatMap((kind) => [`${end}.clickers.${kind}.position`, `${end}.clickers.${kind}.maxPosition`]);
 
 const SPRING_PATHS = (end: EndKind) => [
   `${end}.rateNmm`,
@@ -51,20 +50,44 @@ export const FIELD_GROUPS = {
       [`${end}Geometry`, GEOMETRY_PATHS[end]],
       [`${end}Spring`, SPRING_PATHS(end)],
       [`${end}Adjuster`, ADJUSTER_PATHS(end)],
-      [`${end}Clickers`, CLICKER_PATHS(end)],
     ]),
   ),
 } as Record<string, string[]>;
 
-/** What a rider changes on a bike copied from a shop model: springs, preload setting, clickers. */
-export const RIDER_CHANGE_PATHS = (end: EndKind) => [
-  `${end}.rateNmm`,
-  `${end}.preloadMm`,
-  `${end}.adjuster.position`,
-  ...CLICKER_PATHS(end),
-];
+/** What a rider changes on a bike copied from a shop model: springs and preload setting (and each damping adjuster's setting, DamperFields). */
+export const RIDER_CHANGE_PATHS = (end: EndKind) => [`${end}.rateNmm`, `${end}.preloadMm`, `${end}.adjuster.position`];
 
-const END_PATHS = (end: EndKind) => [...GEOMETRY_PATHS[end], ...SPRING_PATHS(end), ...ADJUSTER_PATHS(end), ...CLICKER_PATHS(end)];
+const END_PATHS = (end: EndKind) => [...GEOMETRY_PATHS[end], ...SPRING_PATHS(end), ...ADJUSTER_PATHS(end)];
+
+/** One damping adjuster as the form holds it: its numbers as typed. */
+export type DamperRow = {
+  kind: string;
+  unit: DamperUnit;
+  maxPosition: string;
+  standard: string;
+  position: string;
+  dampingPerStepNsPerM: string;
+};
+
+const DAMPER_NUMBERS = ['maxPosition', 'standard', 'position', 'dampingPerStepNsPerM'] as const;
+
+/** A new adjuster's row: counted in clicks, every number still to be typed. */
+export function newDamperRow(kind: string): DamperRow {
+  return { kind, unit: 'clicks', maxPosition: '', standard: '', position: '', dampingPerStepNsPerM: '' };
+}
+
+function toDamperRow(damper: DamperAdjuster): DamperRow {
+  const row = { kind: damper.kind, unit: damper.unit } as DamperRow;
+  for (const field of DAMPER_NUMBERS) row[field] = damper[field] === null ? '' : formatNumber(damper[field], 3);
+  return row;
+}
+
+/** Empty is none (the schema says whether that may be); text that is no number goes on to fail as one. */
+function damperFromRow(row: DamperRow): Record<string, unknown> {
+  const damper: Record<string, unknown> = { kind: row.kind, unit: row.unit };
+  for (const field of DAMPER_NUMBERS) damper[field] = row[field].trim() === '' ? null : (parseUserNumber(row[field]) ?? row[field]);
+  return damper;
+}
 
 const CONVERTED: Partial<Record<FieldQuantity, QuantityKind>> = { length: 'length', mass: 'mass', rate: 'rate', force: 'force' };
 
@@ -91,6 +114,7 @@ export function specToForm(spec: Partial<BikeSpec>, nickname: string, units: Dis
   for (const path of paths) {
     values = setIn(values, path, toText(getIn(spec, path), bikeField(path).quantity, units));
   }
+  for (const end of ['front', 'rear'] as const) values = setIn(values, `${end}.dampers`, (spec[end]?.dampers ?? []).map(toDamperRow));
   return values;
 }
 
@@ -101,13 +125,8 @@ function endFromForm(end: EndKind, values: BikeFormValues, units: DisplayUnits, 
     // An empty optional field is left out rather than sent as null where the schema wants a number.
     if (value !== null || !path.endsWith('minPosition')) result = setIn(result, path.slice(end.length + 1), value);
   }
-  const clickers: Record<string, unknown> = {};
-  for (const kind of ['rebound', 'compression']) {
-    const position = fromText(getIn(values, `${end}.clickers.${kind}.position`), 'clicks', units);
-    const maxPosition = fromText(getIn(values, `${end}.clickers.${kind}.maxPosition`), 'clicks', units);
-    clickers[kind] = position === null && maxPosition === null ? null : { position, maxPosition };
-  }
-  return { ...result, clickers };
+  const rows = (getIn(values, `${end}.dampers`) as DamperRow[] | undefined) ?? [];
+  return { ...result, dampers: rows.map(damperFromRow) };
 }
 
 /** The form's values as the API takes them; `base` supplies what the form does not edit (the linkage curve). */

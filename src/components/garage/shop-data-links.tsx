@@ -8,6 +8,7 @@ const EDITORS = [
   { href: '/admin/bike-models', label: 'Bike models' },
   { href: '/admin/target-profiles', label: 'Target profiles' },
   { href: '/admin/engine-settings', label: 'Engine settings' },
+  { href: '/admin/damping-rules', label: 'Damping rules' },
   { href: '/admin/shop-settings', label: 'Shop settings' },
   { href: '/admin/audit', label: 'Audit' },
 ] as const;

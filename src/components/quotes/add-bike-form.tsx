@@ -1,6 +1,6 @@
 import { object, string } from 'yup';
 
-import { ChoiceField } from '@/components/form/choice-field';
+import { ChipField } from '@/components/form/chip-field';
 import { Form } from '@/components/form/form';
 import { FormErrorBanner } from '@/components/form/form-error-banner';
 import { SubmitButton } from '@/components/form/submit-button';
@@ -12,12 +12,15 @@ const addBikeSchema = object({
   nickname: string().trim().required('Give the bike a name the customer knows it by.').max(60, 'At most 60 characters.'),
 });
 
-/** A customer's bike from one of the shop's stored models, whose spec the sizing then uses. */
+/**
+ * A customer's bike from one of the shop's stored models, whose spec the sizing then uses. The
+ * models wrap as chips: four names already run past a phone's width in one row.
+ */
 export function AddBikeForm({ models, onAdd }: { models: BikeModel[]; onAdd: (modelId: number, nickname: string) => Promise<unknown> }) {
   const options = models.map((model) => ({ value: String(model.id), label: model.name }));
   return (
     <Form schema={addBikeSchema} initialValues={{ modelId: undefined, nickname: '' }} onSubmit={({ modelId, nickname }) => onAdd(Number(modelId), nickname)}>
-      <ChoiceField name="modelId" label="Shop model" options={options} />
+      <ChipField name="modelId" label="Shop model" options={options} />
       <TextField name="nickname" label="Bike name" />
       <FormErrorBanner />
       <SubmitButton label="Add the bike" busyLabel="Adding…" />

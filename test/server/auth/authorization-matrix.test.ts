@@ -14,6 +14,7 @@ import { bearer, createAccount, RAISED_LIMITS } from './helpers';
 import { prepareCatalogueFixtures } from '../catalogue/helpers';
 import { makeRiderFlowFixtures } from '../rider/helpers';
 import { makeDeskFixtures } from '../desk/helpers';
+import { makeLoopFixtures } from '../damping/helpers';
 
 type Expected = 'public' | 'quote-token' | 'webhook' | readonly Role[];
 
@@ -69,6 +70,8 @@ const expectations: Record<string, Expected> = {
   'POST /bike-models': ['admin'],
   'PUT /bike-models/:id': ['admin'],
   'DELETE /bike-models/:id': ['admin'],
+  'GET /damper-kinds': everyone,
+  'POST /damper-kinds': ['admin'],
   'GET /bikes': everyone,
   'POST /bikes': everyone,
   'GET /bikes/:id': everyone,
@@ -117,6 +120,16 @@ const expectations: Record<string, Expected> = {
   'POST /customer-quotes/:token/decline': 'quote-token',
   'POST /customer-quotes/:token/pay-deposit': 'quote-token',
   'POST /payments/webhook': 'webhook',
+  'GET /damping-rules': ['desk', 'admin'],
+  'POST /damping-rules': ['desk', 'admin'],
+  'PATCH /damping-rules/:id': ['admin'],
+  'GET /bikes/:id/test-rides': everyone,
+  'POST /bikes/:id/test-rides': everyone,
+  'POST /test-rides/:id/made': everyone,
+  'POST /test-rides/:id/outcome': everyone,
+  'POST /test-rides/:id/undo': everyone,
+  'GET /bikes/:id/damper-plans': everyone,
+  'POST /bikes/:id/damper-plans/:target': everyone,
 };
 
 const key = (route: RouteSpec) => `${route.method.toUpperCase()} ${route.path}`;
@@ -139,6 +152,7 @@ beforeAll(async () => {
   const catalogue = await prepareCatalogueFixtures(t, accounts.counter.id);
   const flow = await makeRiderFlowFixtures(t, accounts.rider, accounts.admin);
   const desk = await makeDeskFixtures(t, accounts.desk, flow.recordId);
+  const loop = await makeLoopFixtures(t, accounts.rider, flow.bikeId);
   params = {
     'PATCH /users/:id/role': { id: target },
     'PATCH /users/:id/active': { id: target },
@@ -190,6 +204,14 @@ beforeAll(async () => {
     'POST /customer-quotes/:token/accept': { token: UNKNOWN_QUOTE_TOKEN },
     'POST /customer-quotes/:token/decline': { token: UNKNOWN_QUOTE_TOKEN },
     'POST /customer-quotes/:token/pay-deposit': { token: UNKNOWN_QUOTE_TOKEN },
+    'PATCH /damping-rules/:id': { id: loop.ruleId },
+    'GET /bikes/:id/test-rides': { id: flow.bikeId },
+    'POST /bikes/:id/test-rides': { id: flow.bikeId },
+    'POST /test-rides/:id/made': { id: loop.rideId },
+    'POST /test-rides/:id/outcome': { id: loop.rideId },
+    'POST /test-rides/:id/undo': { id: loop.rideId },
+    'GET /bikes/:id/damper-plans': { id: flow.bikeId },
+    'POST /bikes/:id/damper-plans/:target': { id: flow.bikeId, target: 'standard' },
   };
   routes = apiRoutes(t);
 });

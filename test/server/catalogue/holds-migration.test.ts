@@ -124,6 +124,8 @@ test('down refuses a springs-released quote and cascading foreign keys, then giv
   await (await Database.open(dir)).close();
 
   const source = await openUpTo(dir, migrations.length);
+  // Database.open ran every migration: undo those after this one first.
+  for (let undone = migrations.length; undone > mine + 1; undone -= 1) await source.undoLastMigration({ transaction: 'each' });
   const rowsBefore = await counts(source);
   // With foreign keys on, dropping "quote" would delete its lines, history and payments.
   await expect(source.undoLastMigration({ transaction: 'each' })).rejects.toThrow(/foreign keys off/);

@@ -35,7 +35,8 @@ describe('from a shop model', () => {
   });
 
   test("with the rider's own changes to a part, and an end left out", async () => {
-    const rear = { ...DEMO_BIKE_MODELS[0].rear!, rateNmm: 105, clickers: { rebound: { position: 6, maxPosition: 20 }, compression: null } };
+    const rebound = { kind: 'rebound', unit: 'turns' as const, maxPosition: 3, standard: 1.5, position: 2, dampingPerStepNsPerM: null };
+    const rear = { ...DEMO_BIKE_MODELS[0].rear!, rateNmm: 105, dampers: [rebound] };
     const res = await a.post('/bikes', { modelId: tarnId, nickname: 'Stiffer', rear, front: null }).expect(201);
     expect(res.body.bike.front).toBeNull();
     expect(res.body.bike.rear).toEqual(rear);

@@ -25,7 +25,10 @@ export const WEIGH_IN: WeighIn = {
 
 export const READINGS = { front: fixture.front.readings as Readings, rear: fixture.rear.readings as Readings };
 
-/** The fixture's bike, with what only the garage keeps: each adjuster's zero and direction, clickers. */
+/**
+ * The fixture's bike, with what only the garage keeps: each adjuster's zero and direction, and the
+ * damping adjusters (fork rebound 12 and compression 10 of 20 clicks; shock rebound 14 of 24).
+ */
 export function handBike(): BikeSpec {
   const { readings: _front, ...front } = fixture.front;
   const { readings: _rear, ...rear } = fixture.rear;
@@ -37,7 +40,10 @@ export function handBike(): BikeSpec {
       secondRateNmm: null,
       breakMm: null,
       adjuster: { ...front.adjuster, kind: 'threaded', zeroReference: 'caps fully out', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 12, maxPosition: 20 }, compression: { position: 10, maxPosition: 20 } },
+      dampers: [
+        { kind: 'rebound', unit: 'clicks', maxPosition: 20, standard: null, position: 12, dampingPerStepNsPerM: null },
+        { kind: 'compression', unit: 'clicks', maxPosition: 20, standard: null, position: 10, dampingPerStepNsPerM: null },
+      ],
     },
     rear: {
       ...rear,
@@ -45,7 +51,7 @@ export function handBike(): BikeSpec {
       secondRateNmm: null,
       breakMm: null,
       adjuster: { ...rear.adjuster, kind: 'threaded', zeroReference: 'collar backed off', addsPreload: 'clockwise' },
-      clickers: { rebound: { position: 14, maxPosition: 24 }, compression: null },
+      dampers: [{ kind: 'rebound', unit: 'clicks', maxPosition: 24, standard: null, position: 14, dampingPerStepNsPerM: null }],
     },
   };
 }

@@ -2,6 +2,7 @@
  * The setup log over HTTP, with the worked example of the issue: front preload baseline 5 turns,
  * changed to 7 then 6.5, so the undo removes 1.5 turns, counter-clockwise as clockwise adds;
  * rebound 12 -> 9 clicks out, so 3 clicks back out; and a spring swap undone. Arithmetic, no source.
+ * Adjusters are named by the seeded list of kinds ("Rebound").
  */
 import { Bike } from '../../../server/entities/bike.entity';
 import { SetupLogEntry } from '../../../server/entities/setup-log-entry.entity';
@@ -46,22 +47,22 @@ describe('the worked example', () => {
     // 2 turns of a 1 mm pitch add 2 mm: 10 -> 12 mm.
     expect(first.bike.front.preloadMm).toBe(12);
 
-    const second = (await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 6.5, rebound: 9, spring: { rateNmm: 9.5 } }, rear: { preloadPosition: 6 } }).expect(201)).body;
+    const second = (await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 6.5, dampers: { rebound: 9 }, spring: { rateNmm: 9.5 } }, rear: { preloadPosition: 6 } }).expect(201)).body;
     expect(second.entry.changes).toEqual([
       { end: 'front', setting: 'spring', from: { rateNmm: 8.5, secondRateNmm: null, breakMm: null, family: 'F37x320' }, to: { rateNmm: 9.5, secondRateNmm: null, breakMm: null, family: 'F37x320' } },
       { end: 'front', setting: 'preload', from: 7, to: 6.5, fromMm: 12, toMm: 11.5 },
-      { end: 'front', setting: 'rebound', from: 12, to: 9 },
+      { end: 'front', setting: 'damper', adjuster: 'rebound', unit: 'clicks', from: 12, to: 9 },
       // 2 turns of a 1.5 mm pitch: 8 -> 11 mm.
       { end: 'rear', setting: 'preload', from: 4, to: 6, fromMm: 8, toMm: 11 },
     ]);
     const bike = (await a.get(`/bikes/${bikeId}`).expect(200)).body.bike;
-    expect([bike.front.rateNmm, bike.front.adjuster.position, bike.front.clickers.rebound.position, bike.rear.preloadMm]).toEqual([9.5, 6.5, 9, 11]);
+    expect([bike.front.rateNmm, bike.front.adjuster.position, bike.front.dampers[0].position, bike.front.dampers[1].position, bike.rear.preloadMm]).toEqual([9.5, 6.5, 9, 10, 11]);
   });
 
   test('back to baseline: remove 1.5 turns counter-clockwise, rebound 3 clicks out, the 8.5 N/mm spring back', async () => {
     const { plan } = (await a.get(`/bikes/${bikeId}/setup-log/back-to-baseline`).expect(200)).body;
     expect(plan.front.preload).toEqual(expect.objectContaining({ changeUnits: -1.5, amount: 1.5, unit: 'turns', direction: 'remove', way: 'counter-clockwise', toPosition: 5 }));
-    expect(plan.front.clickers).toEqual([expect.objectContaining({ clicker: 'rebound', clicks: 3, direction: 'out', toPosition: 12 })]);
+    expect(plan.front.dampers).toEqual([expect.objectContaining({ adjuster: 'rebound', unit: 'clicks', from: 9, to: 12, amount: 3, direction: 'out' })]);
     expect(plan.front.spring).toEqual(expect.objectContaining({ from: expect.objectContaining({ rateNmm: 9.5 }), to: expect.objectContaining({ rateNmm: 8.5 }) }));
     // Rear: 4 - 6 = -2 turns.
     expect(plan.rear.preload).toEqual(expect.objectContaining({ changeUnits: -2, way: 'counter-clockwise' }));
@@ -77,12 +78,12 @@ describe('the worked example', () => {
     const log = (await a.get(`/bikes/${bikeId}/setup-log`).expect(200)).body;
     expect(log.entries.map((e: { kind: string }) => e.kind)).toEqual(['pass', 'change', 'change']);
     expect(log.entries[1].note).toBe('too soft on the brakes');
-    expect(log.baseline.front).toEqual(expect.objectContaining({ preloadPosition: 5, rebound: 12, rateNmm: 8.5 }));
-    expect(log.current.front).toEqual(expect.objectContaining({ preloadPosition: 6.5, rebound: 9, rateNmm: 9.5 }));
+    expect(log.baseline.front).toEqual(expect.objectContaining({ preloadPosition: 5, dampers: { rebound: 12, compression: 10 }, rateNmm: 8.5 }));
+    expect(log.current.front).toEqual(expect.objectContaining({ preloadPosition: 6.5, dampers: { rebound: 9, compression: 10 }, rateNmm: 9.5 }));
   });
 
   test('undoing every step by hand brings the plan to nothing to do', async () => {
-    await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 5, rebound: 12, spring: { rateNmm: 8.5, preloadMm: 10 } }, rear: { preloadPosition: 4 } }).expect(201);
+    await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 5, dampers: { rebound: 12 }, spring: { rateNmm: 8.5, preloadMm: 10 } }, rear: { preloadPosition: 4 } }).expect(201);
     const { plan } = (await a.get(`/bikes/${bikeId}/setup-log/back-to-baseline`).expect(200)).body;
     expect(plan.atBaseline).toBe(true);
   });
@@ -90,8 +91,13 @@ describe('the worked example', () => {
 
 test('a change the bike cannot take is refused by field and changes nothing', async () => {
   const bikeId = await addHandBike(a);
-  const res = await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 16, rebound: 25 }, rear: { compression: 3 } }).expect(400);
-  expect(Object.keys(res.body.error.fields).sort()).toEqual(['front.preloadPosition', 'front.rebound', 'rear.compression']);
+  const res = await a.post(`/bikes/${bikeId}/setup-log`, { front: { preloadPosition: 16, dampers: { rebound: 25 } }, rear: { dampers: { compression: 3, rebound: 14.5 } } }).expect(400);
+  expect(res.body.error.fields).toEqual({
+    'front.preloadPosition': expect.stringMatching(/preload adjuster goes from/),
+    'front.dampers.rebound': 'The setting must be from 0 (fully closed) to 20 clicks out (fully open).',
+    'rear.dampers.compression': 'The shock has no compression adjuster recorded: add it to the bike first.',
+    'rear.dampers.rebound': 'Set whole clicks.',
+  });
   // The fork's rate limit is the bike's (50 N/mm), answered under the change's own path.
   const stiff = await a.post(`/bikes/${bikeId}/setup-log`, { front: { spring: { rateNmm: 60 } } }).expect(400);
   expect(Object.keys(stiff.body.error.fields)).toEqual(['front.spring.rateNmm']);

@@ -12,6 +12,7 @@ import { RouteSpec } from '../../../server/routes/route-table';
 import { bearer, createAccount, RAISED_LIMITS } from '../auth/helpers';
 import { prepareCatalogueFixtures } from '../catalogue/helpers';
 import { listen, makeDeskFixtures } from '../desk/helpers';
+import { makeLoopFixtures } from '../damping/helpers';
 import { as, makeRiderFlowFixtures } from '../rider/helpers';
 import { makeTestContext, TestContext } from '../test-context';
 
@@ -35,6 +36,8 @@ export interface Shop {
     quoteId: string;
     sentQuoteId: string;
     quoteToken: string;
+    rideId: string;
+    ruleId: string;
   };
 }
 
@@ -67,6 +70,7 @@ export async function openShop(): Promise<Shop> {
   const asDesk = await as(t, accounts.desk);
   const sent = await asDesk.post('/quotes', { sizingRecordId: Number(flow.recordId), lines: [{ kind: 'labour', operationCode: 'sag-setup' }] }).expect(201);
   const { token: quoteToken, mailId } = await sendQuoteForToken(t, accounts.desk, accounts.admin, sent.body.quote.id);
+  const loop = await makeLoopFixtures(t, accounts.rider, flow.bikeId);
   const { base, close } = await listen(t);
   return {
     t,
@@ -78,7 +82,7 @@ export async function openShop(): Promise<Shop> {
     routes: apiRoutes(t),
     accounts,
     bystander,
-    ids: { ...flow, ...catalogue, mailId, quoteId: desk.quoteId, sentQuoteId: String(sent.body.quote.id), quoteToken },
+    ids: { ...flow, ...catalogue, ...loop, mailId, quoteId: desk.quoteId, sentQuoteId: String(sent.body.quote.id), quoteToken },
   };
 }
 
@@ -89,6 +93,7 @@ function paramValue(shop: Shop, route: RouteSpec, name: string): string {
   const path = route.path;
   if (name === 'token') return ids.quoteToken;
   if (name === 'discipline') return 'road';
+  if (name === 'target') return 'standard';
   if (name !== 'id') throw new Error(`no value for :${name} in ${routeKey(route)}`);
   if (path.startsWith('/users/')) return String(shop.bystander.id);
   if (path.startsWith('/dev/outbox/')) return ids.mailId;
@@ -99,6 +104,8 @@ function paramValue(shop: Shop, route: RouteSpec, name: string): string {
   if (path.startsWith('/bikes/')) return ids.bikeId;
   if (path.startsWith('/sizing-records/')) return ids.recordId;
   if (path.startsWith('/quotes/')) return ids.quoteId;
+  if (path.startsWith('/test-rides/')) return ids.rideId;
+  if (path.startsWith('/damping-rules/')) return ids.ruleId;
   throw new Error(`no value for :id in ${routeKey(route)}`);
 }
 

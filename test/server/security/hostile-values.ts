@@ -10,6 +10,8 @@ import { isSchema } from 'yup';
 import * as auth from '../../../shared/schemas/auth.schema';
 import * as bike from '../../../shared/schemas/bike.schema';
 import * as catalogue from '../../../shared/schemas/catalogue.schema';
+import * as damperKind from '../../../shared/schemas/damper-kind.schema';
+import * as damping from '../../../shared/schemas/damping.schema';
 import * as draft from '../../../shared/schemas/draft.schema';
 import * as quote from '../../../shared/schemas/quote.schema';
 import * as setupLog from '../../../shared/schemas/setup-log.schema';
@@ -36,7 +38,7 @@ function collectKeys(description: Described, into: Set<string>): void {
 /** Every field name the shared schemas declare, at any depth, plus the engine settings' `values` and prototype keys. */
 export function schemaFieldNames(): string[] {
   const keys = new Set(['values', '__proto__', 'constructor', 'prototype']);
-  for (const module of [auth, bike, catalogue, draft, quote, setupLog, shopData, shopSettings, sizingRecord, sizing, weighIn]) {
+  for (const module of [auth, bike, catalogue, damperKind, damping, draft, quote, setupLog, shopData, shopSettings, sizingRecord, sizing, weighIn]) {
     for (const value of Object.values(module)) if (isSchema(value)) collectKeys(value.describe() as Described, keys);
   }
   return [...keys].sort();

@@ -49,6 +49,8 @@ const BODILESS = new Set([
   'POST /quotes/:id/fitted',
   'POST /quotes/:id/accept',
   'POST /customer-quotes/:token/accept',
+  'POST /test-rides/:id/made',
+  'POST /test-rides/:id/undo',
 ]);
 
 /** The CSV uploads take multipart/form-data, not JSON (uploads.test.ts fuzzes them); here they answer 415 or 400. */

@@ -26,7 +26,7 @@ const bike: BikeSpec = {
     preloadMm: 8,
     family: 'S60-180',
     adjuster: { kind: 'threaded', mmPerUnit: 1.5, position: 4, maxPosition: 40, zeroReference: 'collar backed off', addsPreload: 'clockwise' },
-    clickers: { rebound: null, compression: null },
+    dampers: [],
   },
 };
 const weighIn = { bodyKg: 80, gear: { helmet: 8 }, loads: [{ kind: 'passenger' as const, massKg: 90, rearShare: 1 }], discipline: 'road', position: 'neutral' as const, rearShare: 0.65 };

@@ -48,7 +48,7 @@ test('every demo model and a weigh-in make a request the sizing schema accepts, 
     expect(request.bike).toEqual(model.masses);
     expect(request.front).toEqual(expect.objectContaining({ travelMm: model.front?.travelMm, rateNmm: model.front?.rateNmm, family: model.front?.family }));
     expect(request.front?.adjuster).not.toHaveProperty('zeroReference');
-    expect(request.rear).not.toHaveProperty('clickers');
+    expect(request.rear).not.toHaveProperty('dampers');
   }
 });
 

@@ -34,9 +34,11 @@ describe('bike', () => {
     bad.masses.massKg = '700,5';
     bad.front.rakeDeg = 60;
     bad.front.adjuster.addsPreload = 'clockwise';
-    bad.rear.clickers.rebound.position = 21;
+    // The demo shock's rebound opens 3 turns.
+    bad.rear.dampers[0].position = 3.5;
     const fields = await fieldsOf(bikeSpecSchema, bad);
-    expect(Object.keys(fields).sort()).toEqual(['front.adjuster.addsPreload', 'front.rakeDeg', 'masses.massKg', 'rear.clickers.rebound.position']);
+    expect(Object.keys(fields).sort()).toEqual(['front.adjuster.addsPreload', 'front.rakeDeg', 'masses.massKg', 'rear.dampers[0].position']);
+    expect(fields['rear.dampers[0].position']).toBe('The setting must be from 0 (fully closed) to 3 turns out (fully open).');
     expect(fields['masses.massKg']).toBe('Bike wet mass must be between 30 and 700 kg.');
     expect(fields['front.rakeDeg']).toBe('Rake must be between 0 and 45 deg.');
   });

@@ -58,7 +58,7 @@ describe('navItemsFor', () => {
 
   it('offers each role its own area only', () => {
     expect(labels('rider')).toEqual(['Garage']);
-    expect(labels('desk')).toEqual(['Quotes', 'Customers']);
+    expect(labels('desk')).toEqual(['Quotes', 'Customers', 'Damping rules']);
     expect(labels('counter')).toEqual(['Catalogue', 'Rates', 'Import', 'Low stock', 'Movements', 'Identify']);
   });
 
@@ -70,6 +70,7 @@ describe('navItemsFor', () => {
       ['Shop data', '/admin/bike-models'],
       ['Quotes', '/desk'],
       ['Customers', '/desk/customers'],
+      ['Damping rules', '/desk/damping-rules'],
       ['Catalogue', '/counter'],
       ['Rates', '/counter/rates'],
       ['Import', '/counter/import'],

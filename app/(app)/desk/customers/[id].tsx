@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { WeighInForm } from '@/components/garage/weigh-in-form';
 import { AddBikeForm } from '@/components/quotes/add-bike-form';
+import { BikeDampingSection } from '@/components/quotes/bike-damping-section';
 import { formatDateTime } from '@/components/quotes/quote-status';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -24,9 +25,11 @@ import { useTheme } from '@/theme';
 import type { DisplayUnits, GarageBike, SizingRecordSummary } from '@shared/types/garage';
 
 /**
- * One customer's bikes and the sizing records saved for each: where a quote starts. For a walk-in
- * the desk adds the bike from a shop model and weighs them in; a bike not in yet is sized from the
- * weights, one on the bench from the readings the desk takes.
+ * One customer's bikes and the sizing records saved for each: where a quote starts; and each
+ * bike's dampers, test rides and setup log, where the desk runs the test-ride loop with the
+ * customer at the counter. For a walk-in the desk adds the bike from a shop model and weighs them
+ * in; a bike not in yet is sized from the weights, one on the bench from the readings the desk
+ * takes.
  */
 export default function CustomerScreen() {
   const params = useLocalSearchParams<{ id: string; name?: string }>();
@@ -162,6 +165,7 @@ function BikeRecords({ bike, riderId, customerName, sizeFromWeights }: BikeRecor
           ))}
         </View>
       )}
+      <BikeDampingSection bike={bike} />
     </Card>
   );
 }

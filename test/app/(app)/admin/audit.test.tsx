@@ -1,4 +1,4 @@
-import { fireEvent, screen } from 'expo-router/testing-library';
+import { fireEvent, screen, waitFor } from 'expo-router/testing-library';
 
 import { setAuthToken } from '@/api/client';
 import type { AuditEntry, AuditPage } from '@shared/types/shop-data';
@@ -42,6 +42,28 @@ const ENTRIES = [
   entry(1, { action: 'create', before: null }),
 ];
 
+/** A damping rule as the audit keeps it (the row without its times); an invented shop row. */
+const RULE = {
+  id: 41,
+  symptom: 'squats-throttle',
+  end: 'rear',
+  adjuster: 'ls-compression',
+  direction: 'more',
+  priority: 3,
+  why: 'Slows the rear going down.',
+  feelFor: 'The rear stays up.',
+  claim: null,
+  source: 'shop',
+  active: true,
+  createdById: 1,
+};
+
+const RULE_ENTRIES = [
+  entry(6, { entity: 'damping-rule', entityKey: '41', before: RULE, after: { ...RULE, priority: 5, active: false } }),
+  entry(5, { entity: 'damping-rule', entityKey: '41', action: 'create', before: null, after: RULE }),
+  entry(4, { entity: 'damper-kind', entityKey: 'mid-valve', action: 'create', before: null, after: { key: 'mid-valve', label: 'Mid-valve', circuit: 'compression', speed: 'all' } }),
+];
+
 const page = (entries: AuditEntry[]): AuditPage => ({ entries, total: entries.length, page: 1, pageSize: 25 });
 
 function serve(answers: Answers = {}) {
@@ -49,6 +71,7 @@ function serve(answers: Answers = {}) {
     answerBy({
       'POST /api/auth/refresh': respond(200, sessionAnswer(accountUser('admin'))),
       'GET /api/audit?page=1&pageSize=25': respond(200, page(ENTRIES)),
+      'GET /api/damper-kinds': respond(200, { kinds: [{ key: 'ls-compression', label: 'Low-speed compression', circuit: 'compression', speed: 'low' }] }),
       ...answers,
     }),
   );
@@ -70,6 +93,25 @@ describe('Audit screen', () => {
     expect(screen.getByText('Shop settings created')).toBeOnTheScreen();
     expect(screen.getByText('Tax rate: 20 %')).toBeOnTheScreen();
     expect(screen.getByText('Operations: Sag set-up 20 min')).toBeOnTheScreen();
+  });
+
+  it('says what a damping rule edit changed and what an added rule or adjuster kind is', async () => {
+    serve({ 'GET /api/audit?entity=damping-rule&page=1&pageSize=25': respond(200, page(RULE_ENTRIES.slice(0, 2))), 'GET /api/audit?page=1&pageSize=25': respond(200, page(RULE_ENTRIES)) });
+    renderApp('/admin/audit');
+    expect(await screen.findByText('Damping rule 41 changed')).toBeOnTheScreen();
+    expect(screen.getAllByText('Squats under power, rear (shock)')).toHaveLength(1);
+    expect(screen.getByText('Priority: 3 → 5')).toBeOnTheScreen();
+    expect(screen.getByText('Active: yes, tried → no, switched off')).toBeOnTheScreen();
+    // Unchanged fields are left out of an update.
+    expect(screen.queryByText(/^Why: /)).toBeNull();
+    expect(screen.getByText('Damping rule 41 created')).toBeOnTheScreen();
+    expect(screen.getByText('Squats under power, rear (shock): Low-speed compression, more damping (turn in)')).toBeOnTheScreen();
+    expect(screen.getByText('Priority 3 · added by the shop')).toBeOnTheScreen();
+    expect(screen.getByText('Adjuster kind mid-valve created')).toBeOnTheScreen();
+    expect(screen.getByText('Mid-valve: compression, all shaft speeds')).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole('radio', { name: 'Damping rules' }));
+    await waitFor(() => expect(screen.queryByText('Adjuster kind mid-valve created')).toBeNull());
+    expect(screen.getByText('Damping rule 41 changed')).toBeOnTheScreen();
   });
 
   it('filters to shop settings edits', async () => {

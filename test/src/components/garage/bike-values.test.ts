@@ -1,4 +1,4 @@
-import { formToSpec, specToForm } from '@/components/garage/bike-values';
+import { formToSpec, newDamperRow, specToForm } from '@/components/garage/bike-values';
 import { toDisplayUnits } from '@shared/garage/units';
 import { bikeFormSchema } from '@shared/schemas/bike.schema';
 import type { BikeSpec } from '@shared/types/bike';
@@ -16,7 +16,7 @@ const SPEC: BikeSpec = {
     preloadMm: 10,
     family: 'fork',
     adjuster: { kind: 'spacer', mmPerUnit: 1, position: 0, minPosition: -10, maxPosition: 20, zeroReference: 'stock spacer', addsPreload: 'longer spacer' },
-    clickers: { rebound: null, compression: null },
+    dampers: [],
   },
   rear: {
     wheelTravelMm: 135,
@@ -29,7 +29,11 @@ const SPEC: BikeSpec = {
     preloadMm: 10,
     family: 'shock',
     adjuster: { kind: 'stepped', mmPerUnit: 2.5, position: 2, minPosition: 0, maxPosition: 6, zeroReference: 'softest step', addsPreload: 'clockwise' },
-    clickers: { rebound: { position: 10, maxPosition: 20 }, compression: null },
+    // Invented: a rebound clicker with a maker's standard and a dyno figure, compression in quarter turns.
+    dampers: [
+      { kind: 'rebound', unit: 'clicks', maxPosition: 20, standard: 10, position: 12, dampingPerStepNsPerM: 35.5 },
+      { kind: 'hs-compression', unit: 'turns', maxPosition: 2.5, standard: null, position: 1.25, dampingPerStepNsPerM: null },
+    ],
   },
 };
 
@@ -48,6 +52,20 @@ describe('a bike’s values on the garage form', () => {
     expect(back.rear!.rateNmm).toBeCloseTo(spec.rear!.rateNmm, 1);
     expect(back.rear!.adjuster.position).toBe(spec.rear!.adjuster.position);
     expect(back.front!.travelMm).toBeCloseTo(spec.front!.travelMm, 1);
+    expect(back.rear!.dampers).toEqual(spec.rear!.dampers);
+    expect(back.front!.dampers).toEqual([]);
+  });
+
+  it('holds each damping adjuster as a row of typed text; empty is none, a decimal comma is read', () => {
+    const values = specToForm(SPEC, 'Blue one', metric) as Record<string, Record<string, unknown>>;
+    expect(values.rear.dampers).toEqual([
+      { kind: 'rebound', unit: 'clicks', maxPosition: '20', standard: '10', position: '12', dampingPerStepNsPerM: '35.5' },
+      { kind: 'hs-compression', unit: 'turns', maxPosition: '2.5', standard: '', position: '1.25', dampingPerStepNsPerM: '' },
+    ]);
+    const typed = { ...values, rear: { ...values.rear, dampers: [{ ...newDamperRow('ls-compression'), maxPosition: '3', position: '1,75' }] } } as never;
+    expect((formToSpec(typed, metric, SPEC).rear as { dampers: unknown[] }).dampers).toEqual([
+      { kind: 'ls-compression', unit: 'clicks', maxPosition: 3, standard: null, position: 1.75, dampingPerStepNsPerM: null },
+    ]);
   });
 
   it('shows lengths in inches and rates in kgf/mm, reading a decimal comma back', () => {

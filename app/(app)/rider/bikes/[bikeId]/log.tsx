@@ -12,9 +12,11 @@ import { LoadingState } from '@/components/ui/loading-state';
 import { Screen } from '@/components/ui/screen';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useBike } from '@/hooks/use-bikes';
+import { useDamperKinds } from '@/hooks/use-damper-kinds';
 import { useBikeRecords } from '@/hooks/use-sizing-records';
 import { useBackToBaseline, useSetupLog } from '@/hooks/use-setup-log';
 import { useUnits } from '@/hooks/use-units';
+import { labelsOf } from '@shared/setup/damper-words';
 import type { SetupLogEntry } from '@shared/types/setup-log';
 import { useLayout, useTheme } from '@/theme';
 
@@ -31,6 +33,8 @@ export default function SetupLogScreen() {
   const bike = useBike(bikeId);
   const log = useSetupLog(bikeId);
   const records = useBikeRecords(bikeId);
+  // Until the list loads (or if it cannot), adjusters read as their keys.
+  const labels = labelsOf(useDamperKinds().data?.kinds ?? []);
   const [showPlan, setShowPlan] = useState(false);
   const plan = useBackToBaseline(bikeId, showPlan);
 
@@ -47,7 +51,7 @@ export default function SetupLogScreen() {
   const lines = (entry: SetupLogEntry) =>
     entry.kind === 'pass'
       ? [entry.sizing?.rear?.riderSagMm != null || entry.sizing?.front?.riderSagMm != null ? 'Sag measured' : 'Worked out from weights']
-      : entry.changes.map((change) => describeChange(change, units));
+      : entry.changes.map((change) => describeChange(change, units, labels));
 
   return (
     <Screen width="table">

@@ -2,6 +2,8 @@ import { useLocalSearchParams } from 'expo-router';
 import { Platform, View } from 'react-native';
 
 import { useDecisionText } from '@/components/result/decision-view';
+import { DamperSettingRow } from '@/components/test-ride/dampers-summary';
+import { END_WORDS } from '@/components/test-ride/ride-words';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { LoadingState } from '@/components/ui/loading-state';
@@ -11,16 +13,25 @@ import { ThemedText } from '@/components/ui/themed-text';
 import { Quantity } from '@/components/units/quantity';
 import { useQuantityFormat } from '@/components/units/quantity-format';
 import { useBike } from '@/hooks/use-bikes';
+import { useDamperKinds } from '@/hooks/use-damper-kinds';
+import { useDamperPlans } from '@/hooks/use-damper-plans';
 import { useSizingRecord } from '@/hooks/use-sizing-records';
 import { describeLoadCase, nameSpring } from '@shared/sizing/decision-text';
-import type { EndResult } from '@shared/types/sizing';
+import type { Bike } from '@shared/types/bike';
+import type { DamperKind, DamperPlan } from '@shared/types/damping';
+import type { EndKind, EndResult } from '@shared/types/sizing';
+import type { DamperPlans } from '@shared/types/test-ride';
 import { useTheme } from '@/theme';
 
+/** A label and its figure; on a phone a long label (with its window) pushes the figure to a line of its own. */
 function Line({ label, children }: { label: string; children: React.ReactNode }) {
+  const { spacing, colors } = useTheme();
   return (
-    <View style={{ flexDirection: 'row', justifyContent: 'space-between', borderBottomWidth: 1, borderColor: '#ccc', paddingVertical: 4 }}>
+    <View
+      style={{ flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', columnGap: spacing.md, borderBottomWidth: 1, borderColor: colors.border, paddingVertical: spacing.xs }}
+    >
       <ThemedText>{label}</ThemedText>
-      {children}
+      <View style={{ marginLeft: 'auto' }}>{children}</View>
     </View>
   );
 }
@@ -56,12 +67,69 @@ function EndSheet({ result }: { result: EndResult }) {
   );
 }
 
+/** A plan on paper: its numbered turns, what it leaves as it is, or that the end is there already. */
+function PlanSheet({ title, plan, testID }: { title: string; plan: DamperPlan; testID: string }) {
+  const { spacing } = useTheme();
+  return (
+    <View style={{ gap: spacing.xxs }} testID={testID}>
+      <ThemedText type="label">{title}</ThemedText>
+      {plan.atTarget && <ThemedText>Already there.</ThemedText>}
+      {plan.steps.map((step, i) => (
+        <ThemedText key={step.adjuster}>
+          {i + 1}. {step.instruction}
+        </ThemedText>
+      ))}
+      {plan.missing.map((line) => (
+        <ThemedText key={line} type="caption">
+          Left as it is: {line}
+        </ThemedText>
+      ))}
+    </View>
+  );
+}
+
+const ENDS: readonly EndKind[] = ['front', 'rear'];
+
+/**
+ * The damping adjusters as they are set now (which may be later than the pass), each with the
+ * maker's standard, and per end both ways back, so the sheet at the bike is enough to undo a day
+ * of test rides.
+ */
+function DampersSheet({ bike, plans, kinds }: { bike: Bike; plans: DamperPlans | undefined; kinds?: readonly DamperKind[] }) {
+  const { spacing } = useTheme();
+  const ends = ENDS.filter((end) => (bike[end]?.dampers.length ?? 0) > 0);
+  if (ends.length === 0) return null;
+  return (
+    <View style={{ gap: spacing.sm }} testID="sheet-dampers">
+      <ThemedText type="heading">Dampers</ThemedText>
+      <ThemedText type="caption">As set on {new Date().toLocaleDateString()}, counted out from fully closed.</ThemedText>
+      {ends.map((end) => (
+        <View key={end} style={{ gap: spacing.xs }} testID={`sheet-dampers-${end}`}>
+          <ThemedText type="bodyStrong">{END_WORDS[end]}</ThemedText>
+          {bike[end]!.dampers.map((damper) => (
+            <DamperSettingRow key={damper.kind} damper={damper} kinds={kinds} testID={`sheet-dampers-${end}-${damper.kind}`} />
+          ))}
+          {plans?.[end] && (
+            <>
+              <PlanSheet title="Back to the maker’s standard" plan={plans[end].standard} testID={`sheet-plan-${end}-standard`} />
+              <PlanSheet title="Back to the baseline" plan={plans[end].baseline} testID={`sheet-plan-${end}-baseline`} />
+            </>
+          )}
+        </View>
+      ))}
+      {plans && <ThemedText type="caption">{plans.baselineText}</ThemedText>}
+    </View>
+  );
+}
+
 /** One pass on one page, plain enough to print and take to the bike. */
 export default function SetupSheetScreen() {
   const { spacing } = useTheme();
   const recordId = Number(useLocalSearchParams<{ recordId: string }>().recordId);
   const { data, error, mutate } = useSizingRecord(recordId);
   const bike = useBike(data?.record.bikeId ?? undefined);
+  const plans = useDamperPlans(data?.record.bikeId ?? undefined);
+  const kinds = useDamperKinds().data?.kinds;
   if (error) {
     return (
       <Screen>
@@ -87,6 +155,7 @@ export default function SetupSheetScreen() {
       <View style={{ gap: spacing.lg }} testID="setup-sheet">
         {record.result.front && <EndSheet result={record.result.front} />}
         {record.result.rear && <EndSheet result={record.result.rear} />}
+        {bike.data && <DampersSheet bike={bike.data.bike} plans={plans.data} kinds={kinds} />}
       </View>
       <View style={{ gap: 2 }}>
         {SAFETY_CAUTIONS.map((caution) => (

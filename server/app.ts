@@ -8,7 +8,7 @@ import cookieParser from 'cookie-parser';
 import cors from 'cors';
 import express, { Express, RequestHandler } from 'express';
 import helmet from 'helmet';
-import { AppContext } from './context';
+import type { AppContext } from './app-context';
 import { authGuards } from './middleware/auth';
 import { apiErrorHandler, apiNotFound, pageErrorHandler } from './middleware/error-handler';
 import { apiRoutes } from './routes';

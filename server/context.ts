@@ -1,31 +1,15 @@
 import path from 'node:path';
+import type { AppContext } from './app-context';
 import { Database } from './data-source';
 import { ServerConfig } from './env';
 import { SmtpOutbox } from './fakes/smtp-outbox';
 import { loadJwtSecret } from './services/jwt-secret.service';
-import { createMailer, Mailer } from './services/mailer.service';
-import { openPaymentGateway, PaymentGateway } from './services/payments.service';
+import { createMailer } from './services/mailer.service';
+import { openPaymentGateway } from './services/payments.service';
 import { PublicAddress } from './services/public-address.service';
 import { SizingDataCache } from './services/sizing-data.service';
 
-/** What every router and service is built from; tests assemble their own. */
-export interface AppContext {
-  config: ServerConfig;
-  db: Database;
-  log: (message: string, detail?: unknown) => void;
-  /** The one clock services read, so tests move time instead of sleeping. */
-  now: () => Date;
-  secrets: { jwt: string };
-  mailer: Mailer;
-  /** Profiles, settings and candidate springs the sizing reads, and catalogue search totals, cached until a write invalidates them. */
-  sizingData: SizingDataCache;
-  /** The card payment provider's SDK, pointed at the local stand-in outside production without keys. */
-  payments: PaymentGateway;
-  /** The local SMTP stand-in, when this installation runs one (never in production). */
-  outbox?: SmtpOutbox;
-  /** Where links in mails point and which origin the cookie routes trust; never a request's Host. */
-  publicAddress: PublicAddress;
-}
+export type { AppContext } from './app-context';
 
 export interface OpenContext {
   ctx: AppContext;

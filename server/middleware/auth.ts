@@ -1,20 +1,16 @@
 /** The guards behind the access classes of the route table, and the signed-in user they leave on the request. */
 import { Request, RequestHandler } from 'express';
 import { Role } from '../../shared/types/roles';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Quote } from '../entities/quote.entity';
 import { BadRequestError, ForbiddenError, HttpError, UnauthorizedError } from '../errors';
 import { hashQuoteToken } from '../services/quote-token';
 import { Guards } from '../routes/route-table';
 import { SessionService } from '../services/session.service';
+import type { AuthUser } from '../types/auth-user';
 
-/** Who is calling, as `req.user` holds it. */
-export interface AuthUser {
-  id: number;
-  role: Role;
-  email: string;
-  name: string;
-}
+/** Who is calling, as `req.user` holds it (server/types/auth-user.ts). */
+export type { AuthUser };
 
 export function bearerToken(req: Request): string | undefined {
   const match = /^Bearer\s+(\S+)$/i.exec(req.get('authorization') ?? '');

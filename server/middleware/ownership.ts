@@ -1,7 +1,7 @@
 /** Who sees whose records: the service desk and the admin see every customer's, anyone else only their own. */
 import { Role } from '../../shared/types/roles';
 import { NotFoundError } from '../errors';
-import { AuthUser } from './auth';
+import type { AuthUser } from '../types/auth-user';
 
 export const SEES_ALL_CUSTOMERS: readonly Role[] = ['desk', 'admin'];
 

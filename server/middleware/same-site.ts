@@ -5,7 +5,7 @@
  * request with neither header does not come from another site's page (curl, a script) and passes.
  */
 import { Request, RequestHandler } from 'express';
-import type { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { ForbiddenError } from '../errors';
 
 const REFUSED = "This request came from another site's page, so it was refused. Open the shop's own page and try again.";

@@ -5,7 +5,7 @@ const columns = SEARCHED.map((c) => `"${c}"`).join(', ');
 const values = (row: 'new' | 'old') => SEARCHED.map((c) => `${row}."${c}"`).join(', ');
 
 /**
- * Indexes for searching a catalogue of 100,000 springs (see DEVELOPERS.md, "Indexes added"):
+ * Indexes for searching a catalogue of 100,000 springs (see docs/parts-counter.md, "Indexes added"):
  * - `spring_rate_search`, an FTS5 index of trigrams over SKU, family and supplier's code, so a text
  *   search of three characters or more finds its substring without reading every row. It holds
  *   only the index (external content: the text stays in spring_rate), kept in step by triggers.

@@ -12,7 +12,7 @@ const CHANGED = [
  * every SQLite index ends with, or named where `active` follows it), a page is read in order and
  * stops at its LIMIT instead of sorting every row the filter finds: at 100,000 springs a rate range
  * of one kind went from about 5 to 2 ms and page 40 in family order from 6 to 1.5 ms
- * (DEVELOPERS.md, "Query plans"). The sizing's candidate read of a fit uses the same order.
+ * (docs/performance.md, "Query plans"). The sizing's candidate read of a fit uses the same order.
  */
 export class SearchOrderIndexes1764634500000 implements MigrationInterface {
   name = 'SearchOrderIndexes1764634500000';

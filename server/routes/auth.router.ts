@@ -6,7 +6,7 @@
 import { Response } from 'express';
 import { resetRequestSchema, resetSchema, signInSchema, signUpSchema } from '../../shared/schemas/auth.schema';
 import { SessionAnswer } from '../../shared/types/account';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { User } from '../entities/user.entity';
 import { UnauthorizedError } from '../errors';
 import { currentUser } from '../middleware/auth';

@@ -1,6 +1,6 @@
 /** The shop's bike models: every signed-in account reads them (to make a bike from one), the admin writes them. */
 import { bikeModelSchema } from '../../shared/schemas/bike.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { BikeModelInput, BikeModelsService } from '../services/bike-models.service';
 import { idParam } from './params';

@@ -1,6 +1,6 @@
 /** The garage. A rider reaches only their own bikes; desk and admin reach any customer's (`?riderId=` to list one's garage). */
 import { bikeCreateSchema, bikeFormSchema } from '../../shared/schemas/bike.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { BikeCreateInput, BikesService, BikeUpdateInput } from '../services/bikes.service';
 import { idParam, riderQuery } from './params';

@@ -16,7 +16,7 @@ import {
 } from '../../shared/schemas/catalogue.schema';
 import type { LowStockLine, RatesForFit, SpringAnswer } from '../../shared/types/catalogue';
 import { toSi } from '../../shared/units';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { NotFoundError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { CatalogueExportService } from '../services/catalogue-export.service';

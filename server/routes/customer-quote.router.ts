@@ -1,7 +1,7 @@
 /** The customer's quote page: every route is opened by the link's token alone, for its one quote. */
 import { Response } from 'express';
 import { payDepositSchema, quoteNoteSchema } from '../../shared/schemas/quote.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { PaymentsService } from '../services/payments.service';
 import { QuoteActor } from '../services/quote-rules';
 import { QuotesService } from '../services/quotes.service';

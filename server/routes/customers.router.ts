@@ -1,7 +1,7 @@
 /** The desk's customer search and walk-in accounts; their bikes, weigh-ins and records are the rider routes with ?riderId=. */
 import { number, object, string } from 'yup';
 import { customerCreateSchema } from '../../shared/schemas/quote.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { CustomersService } from '../services/customers.service';
 import { RouteSpec, signedIn } from './route-table';
 import { parseInput } from './validate';

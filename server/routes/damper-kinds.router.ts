@@ -1,7 +1,7 @@
 /** The shop's damping adjuster kinds: every signed-in account reads them (to describe a bike), the admin adds to them. */
 import { damperKindCreateSchema } from '../../shared/schemas/damper-kind.schema';
 import type { DamperKind } from '../../shared/types/damping';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { DamperKindsService } from '../services/damper-kinds.service';
 import { anyRole, RouteSpec, signedIn } from './route-table';

@@ -1,7 +1,7 @@
 /** A bike's damping adjusters back to the maker's standard or the rider's baseline: the plans, and either one put on the bike. */
 import { damperPlanApplySchema } from '../../shared/schemas/damping.schema';
 import { DAMPER_PLAN_TARGETS, type DamperPlanTarget } from '../../shared/types/test-ride';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { NotFoundError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { DamperPlansService } from '../services/damper-plans.service';

@@ -1,7 +1,7 @@
 /** The symptom-to-change table: the desk and the admin read it and add the shop's own rows; the admin edits any row. */
 import { dampingRuleCreateSchema, dampingRulePatchSchema } from '../../shared/schemas/damping.schema';
 import type { DampingRuleAnswer, DampingRuleList } from '../../shared/types/test-ride';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { DampingRulesService } from '../services/damping-rules.service';
 import { idParam } from './params';

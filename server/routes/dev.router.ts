@@ -1,5 +1,5 @@
 /** Development only: the admin reads what the local SMTP stand-in caught. Absent (404) in production. */
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { NotFoundError } from '../errors';
 import { RouteSpec, signedIn } from './route-table';
 

@@ -1,6 +1,6 @@
 /** The measuring flow's draft of one bike: read, saved at every step (idempotent), started afresh, deleted. */
 import { draftStartSchema } from '../../shared/schemas/draft.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { DraftsService } from '../services/drafts.service';
 import { idParam } from './params';

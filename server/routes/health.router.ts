@@ -1,5 +1,5 @@
 import { RouteSpec, publicAccess } from './route-table';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 
 export function healthRoutes(ctx: AppContext): RouteSpec[] {
   return [

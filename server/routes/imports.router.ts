@@ -7,7 +7,7 @@
 import { Request, Response } from 'express';
 import multer, { MulterError } from 'multer';
 import { importFormSchema, pageSchema } from '../../shared/schemas/catalogue.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { BadRequestError, HttpError, NotFoundError, ValidationError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { CatalogueImportService, Upload } from '../services/catalogue-import.service';

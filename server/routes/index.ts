@@ -1,4 +1,4 @@
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { authRoutes } from './auth.router';
 import { bikeModelRoutes } from './bike-models.router';
 import { bikeRoutes } from './bikes.router';

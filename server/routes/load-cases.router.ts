@@ -1,7 +1,7 @@
 /** A bike's load cases: the settings each needs on its fitted spring, and the switch between them. */
 import { loadCaseSwitchSchema } from '../../shared/schemas/setup-log.schema';
 import type { LoadCaseSwitchInput } from '../../shared/types/load-case';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { LoadCasesService } from '../services/load-cases.service';
 import { idParam } from './params';

@@ -1,5 +1,5 @@
 /** The payment provider's webhook: raw body (mounted before the JSON parser in app.ts), verified signature. */
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { PaymentsService } from '../services/payments.service';
 import { RouteSpec, webhookAccess } from './route-table';
 

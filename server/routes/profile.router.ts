@@ -1,7 +1,7 @@
 /** The rider's profile: the units preference (every account, its own) and the current weigh-in (desk and admin: `?riderId=`). */
 import { unitsPreferenceSchema, weighInSchema } from '../../shared/schemas/weigh-in.schema';
 import type { WeighIn } from '../../shared/types/garage';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { ProfileService } from '../services/profile.service';
 import { riderQuery } from './params';

@@ -1,6 +1,6 @@
 /** The desk's quotes (board, detail, create, lines, send, revise, book, fitted, cancel) and the signed-in rider's own. */
 import { payDepositSchema, quoteBookSchema, quoteCreateSchema, quoteLinesSchema, quoteListQuerySchema, quoteNoteSchema, type QuoteLineInput } from '../../shared/schemas/quote.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { PaymentsService } from '../services/payments.service';
 import { QuoteMailService } from '../services/quote-mail.service';

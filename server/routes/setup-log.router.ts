@@ -1,7 +1,7 @@
 /** A bike's setup log: the entries with the baseline, a change as the rider reports it, and the way back to the baseline. */
 import { setupChangeSchema } from '../../shared/schemas/setup-log.schema';
 import type { SetupChangeInput } from '../../shared/types/setup-log';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { SetupLogService } from '../services/setup-log.service';
 import { idParam } from './params';

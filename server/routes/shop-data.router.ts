@@ -1,6 +1,6 @@
 /** The admin's shop data editors: target profiles, the engine's settings, and the audit of every edit. */
 import { auditQuerySchema, targetProfileUpdateSchema } from '../../shared/schemas/shop-data.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { NotFoundError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { AuditService } from '../services/audit.service';

@@ -1,6 +1,6 @@
 /** The shop's terms for quotes: the desk reads them, the admin sets them. */
 import { shopSettingsSchema } from '../../shared/schemas/shop-settings.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { ShopSettingsService } from '../services/shop-settings.service';
 import { RouteSpec, signedIn } from './route-table';

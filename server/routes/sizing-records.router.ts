@@ -1,6 +1,6 @@
 /** Saved passes: created per bike (by its rider, or by the desk on the rider's behalf), listed per bike, read one by one. */
 import { sizingRecordCreateSchema } from '../../shared/schemas/sizing-record.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { SizingRecordInput, SizingRecordsService } from '../services/sizing-records.service';
 import { idParam } from './params';

@@ -1,5 +1,5 @@
 import { validateSizingRequest } from '../../shared/schemas/sizing.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { ValidationError } from '../errors';
 import { runSizing } from '../services/sizing.service';
 import { anyRole, RouteSpec } from './route-table';

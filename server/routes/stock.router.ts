@@ -20,7 +20,7 @@ import {
 import type { StockAnswer, StockHoldList } from '../../shared/types/catalogue';
 import type { Role } from '../../shared/types/roles';
 import type { RateUnit } from '../../shared/units';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { CatalogueExportService } from '../services/catalogue-export.service';
 import { toSpringView } from '../services/catalogue.service';

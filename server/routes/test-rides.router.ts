@@ -4,7 +4,7 @@
  * and admin reach every customer's, as with the bike routes.
  */
 import { testRideOutcomeSchema, testRideReportSchema } from '../../shared/schemas/damping.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/auth';
 import { TestRidesService } from '../services/test-rides.service';
 import { idParam } from './params';

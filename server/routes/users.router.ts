@@ -1,7 +1,7 @@
 /** The admin's user management: list and search, create any account, change a role, switch an account off or on. */
 import { Request } from 'express';
 import { activeChangeSchema, roleChangeSchema, staffCreateSchema, userSearchSchema } from '../../shared/schemas/auth.schema';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { NotFoundError } from '../errors';
 import { currentUser } from '../middleware/auth';
 import { toAccountUser, UsersService } from '../services/users.service';

@@ -2,9 +2,9 @@
 import { EntityManager } from 'typeorm';
 import type { AuditEntity } from '../../shared/schemas/shop-data.schema';
 import type { AuditAction, AuditEntry as AuditEntryView, AuditPage } from '../../shared/types/shop-data';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { AuditEntry } from '../entities/audit-entry.entity';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 
 export interface AuditRecord {
   entity: AuditEntity;

@@ -1,10 +1,10 @@
 /** The shop's catalogue of bike models: read by everyone signed in, written by the admin, every write audited. */
 import { EntityManager } from 'typeorm';
 import type { BikeModel as BikeModelView, BikeSpec } from '../../shared/types/bike';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { BikeModel } from '../entities/bike-model.entity';
 import { ConflictError, NotFoundError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { recordAudit } from './audit.service';
 import { assertKnownDamperKinds } from './damper-kinds.service';
 

@@ -6,7 +6,7 @@
  */
 import type { Response } from 'express';
 import type { SpringKind } from '../../shared/types/catalogue';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { CATALOGUE_COLUMNS } from './catalogue-csv';
 import { CatalogueService } from './catalogue.service';
 import { sendCsv, type CsvCells } from './csv-export';

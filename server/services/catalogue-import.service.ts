@@ -34,7 +34,7 @@ import {
   type SpringKind,
 } from '../../shared/types/catalogue';
 import { parseUserNumber, toSi, type RateUnit } from '../../shared/units';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { pauseForFault } from '../db/fault-pause';
 import { ImportBatch } from '../entities/import-batch.entity';
 import { User } from '../entities/user.entity';

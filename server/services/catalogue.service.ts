@@ -8,7 +8,7 @@ import { findSpringConflicts, type SpringCreateInput, type SpringListInput, type
 import type { FamilySummary, SpringDetail, SpringKind, SpringPage, SpringSummary, SpringView } from '../../shared/types/catalogue';
 import type { Role } from '../../shared/types/roles';
 import { fromSi, toSi, type RateUnit } from '../../shared/units';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { SpringRate } from '../entities/spring-rate.entity';
 import { ConflictError, NotFoundError, ValidationError } from '../errors';
 import { writeCatalogue } from './stock.service';

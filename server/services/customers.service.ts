@@ -3,7 +3,7 @@ import { randomBytes } from 'node:crypto';
 import { EntityManager } from 'typeorm';
 import type { CustomerSummary } from '../../shared/types/quote';
 import type { Role } from '../../shared/types/roles';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Bike } from '../entities/bike.entity';
 import { User } from '../entities/user.entity';
 import { hashPassword } from './password.service';

@@ -5,10 +5,10 @@
 import { EntityManager, In } from 'typeorm';
 import type { BikeSpec } from '../../shared/types/bike';
 import type { DamperKind as DamperKindView } from '../../shared/types/damping';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { DamperKind } from '../entities/damper-kind.entity';
 import { ConflictError, ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { recordAudit } from './audit.service';
 
 /** In the order they were added: the six of the trade first, as their migration lists them. */

@@ -9,11 +9,11 @@ import type { DamperKind as DamperKindView, DamperPlan } from '../../shared/type
 import type { SetupSettings } from '../../shared/types/setup-log';
 import type { EndKind } from '../../shared/types/sizing';
 import type { DamperPlanApplied, DamperPlans, DamperPlanTarget, EndDamperPlans } from '../../shared/types/test-ride';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Bike } from '../entities/bike.entity';
 import { SetupLogEntry } from '../entities/setup-log-entry.entity';
 import { ConflictError, ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { findOwnedBike } from './bikes.service';
 import { DamperKindsService } from './damper-kinds.service';
 import { SetupLogService, writeSetupChange } from './setup-log.service';

@@ -9,11 +9,11 @@ import { symptomEndProblem, type DampingRuleCreateInput, type DampingRulePatchIn
 import type { DamperKind as DamperKindView, DampingRule as DampingRuleShape, SymptomKey } from '../../shared/types/damping';
 import type { EndKind } from '../../shared/types/sizing';
 import type { DampingRuleView } from '../../shared/types/test-ride';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { DamperKind } from '../entities/damper-kind.entity';
 import { DampingRule } from '../entities/damping-rule.entity';
 import { ConflictError, NotFoundError, ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { recordAudit } from './audit.service';
 import { DamperKindsService } from './damper-kinds.service';
 

@@ -9,12 +9,12 @@ import { draftSaveSchema, type DraftContext } from '../../shared/schemas/draft.s
 import { toFieldErrors } from '../../shared/schemas/field-errors';
 import type { DraftAnswers, DraftHints, MeasuringDraft as DraftView, MeasuringStep } from '../../shared/types/garage';
 import type { EndKind } from '../../shared/types/sizing';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Bike } from '../entities/bike.entity';
 import { MeasuringDraft } from '../entities/measuring-draft.entity';
 import { SizingRecord } from '../entities/sizing-record.entity';
 import { ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { findOwnedBike } from './bikes.service';
 
 const PART: Record<EndKind, string> = { front: 'fork', rear: 'shock' };

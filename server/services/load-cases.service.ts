@@ -10,11 +10,11 @@ import { formatNumber } from '../../shared/sizing/format';
 import type { ActiveLoadCase, LoadCaseOption, LoadCasesAnswer } from '../../shared/types/load-case';
 import type { SetupChangeInput } from '../../shared/types/setup-log';
 import type { EndKind } from '../../shared/types/sizing';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Bike } from '../entities/bike.entity';
 import { SizingRecord } from '../entities/sizing-record.entity';
 import { ConflictError, ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { findOwnedBike } from './bikes.service';
 import { SetupChangeAnswer, SetupLogService, writeSetupChange } from './setup-log.service';
 

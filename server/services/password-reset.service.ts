@@ -4,7 +4,7 @@
  */
 import { createHash, randomBytes } from 'node:crypto';
 import { EntityManager, IsNull } from 'typeorm';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { PasswordReset } from '../entities/password-reset.entity';
 import { User } from '../entities/user.entity';
 import { ValidationError } from '../errors';

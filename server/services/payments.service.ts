@@ -9,16 +9,16 @@
 import Stripe from 'stripe';
 import { EntityManager } from 'typeorm';
 import type { QuoteStatus, QuoteView, ReceiptView } from '../../shared/types/quote';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { ServerConfig } from '../env';
 import { PaymentStandIn } from '../fakes/payment-service';
 import { Payment } from '../entities/payment.entity';
 import { PaymentWebhookEvent } from '../entities/payment-webhook-event.entity';
 import { Quote } from '../entities/quote.entity';
 import { BadRequestError, ConflictError, HttpError, NotFoundError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { assertOwnerOrStaff } from '../middleware/ownership';
-import { formatCents } from './quote-mail.service';
+import { formatCents } from '../../shared/money/format-cents';
 import { moveQuote, noteOnQuote, QuoteActor } from './quote-rules';
 import { toQuoteView, toReceipt } from './quote-view';
 

@@ -4,10 +4,10 @@ import { DEFAULT_UNITS, defaultRateUnit, toDisplayUnits } from '../../shared/gar
 import { totalWeighIn } from '../../shared/garage/weigh-in';
 import type { DisplayUnits, UnitSystem, WeighIn, WeighInAnswer } from '../../shared/types/garage';
 import type { RateUnit } from '../../shared/units';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { RiderProfile } from '../entities/rider-profile.entity';
 import { ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { resolveRider } from './bikes.service';
 
 function answerOf(profile: RiderProfile | null): WeighInAnswer {

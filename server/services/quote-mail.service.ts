@@ -1,16 +1,10 @@
 /** Sends a quote to its rider: HTML and plain text, with the customer link that opens it. */
 import type { QuoteView } from '../../shared/types/quote';
-import { AppContext } from '../context';
-import { AuthUser } from '../middleware/auth';
+import type { AppContext } from '../app-context';
+import type { AuthUser } from '../types/auth-user';
+import { formatCents } from '../../shared/money/format-cents';
 import { OutgoingMail } from './mailer.service';
 import { QuotesService } from './quotes.service';
-
-/** Integer cents as "EUR 123.45", without floating point. */
-export function formatCents(cents: number, currency: string): string {
-  const sign = cents < 0 ? '-' : '';
-  const abs = Math.abs(cents);
-  return `${sign}${currency} ${Math.floor(abs / 100)}.${String(abs % 100).padStart(2, '0')}`;
-}
 
 function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);

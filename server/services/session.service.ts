@@ -6,7 +6,7 @@
  */
 import { createSecretKey, KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { User } from '../entities/user.entity';
 
 export type TokenKind = 'access' | 'refresh';

@@ -6,11 +6,11 @@
 import { checkEngineSettings } from '../../shared/schemas/shop-data.schema';
 import type { EngineSettingRow } from '../../shared/types/shop-data';
 import type { EndWindowsPct, TargetProfile as ProfileView } from '../../shared/types/sizing';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { EngineSetting } from '../entities/engine-setting.entity';
 import { TargetProfile } from '../entities/target-profile.entity';
 import { NotFoundError, ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { recordAudit } from './audit.service';
 import { toProfile, toProfileRow } from './sizing-data.service';
 

@@ -3,11 +3,11 @@ import { isDeepStrictEqual } from 'node:util';
 import { EntityManager } from 'typeorm';
 import type { ShopSettingsInput } from '../../shared/schemas/shop-settings.schema';
 import type { ShopIdentity, ShopSettingsView } from '../../shared/types/quote';
-import type { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Shop } from '../entities/shop.entity';
 import { ShopSettings } from '../entities/shop-settings.entity';
 import { ConflictError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { recordAudit } from './audit.service';
 
 const SETTINGS_ID = 1;

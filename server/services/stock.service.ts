@@ -11,7 +11,7 @@
 import { EntityManager, In } from 'typeorm';
 import { MAX_STOCK_QUANTITY } from '../../shared/schemas/catalogue.schema';
 import type { HoldStatus, MovementKind, MovementPage, StockHoldView, StockMovementView } from '../../shared/types/catalogue';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Quote } from '../entities/quote.entity';
 import { SpringRate } from '../entities/spring-rate.entity';
 import { StockHold } from '../entities/stock-hold.entity';

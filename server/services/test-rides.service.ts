@@ -16,12 +16,12 @@ import type { DamperAdjuster, DamperKind as DamperKindView, DamperPlan, Proposed
 import type { SetupChangeInput } from '../../shared/types/setup-log';
 import type { EndKind } from '../../shared/types/sizing';
 import type { TestRideChanged, TestRideJudged, TestRideList, TestRideReported, TestRideView } from '../../shared/types/test-ride';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { Bike } from '../entities/bike.entity';
 import { SizingRecord } from '../entities/sizing-record.entity';
 import { TestRide } from '../entities/test-ride.entity';
 import { ConflictError, NotFoundError, ValidationError } from '../errors';
-import { AuthUser } from '../middleware/auth';
+import type { AuthUser } from '../types/auth-user';
 import { findOwnedBike } from './bikes.service';
 import { DamperKindsService } from './damper-kinds.service';
 import { activeRules } from './damping-rules.service';

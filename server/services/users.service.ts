@@ -2,7 +2,7 @@
 import { EntityManager } from 'typeorm';
 import { AccountUser, UserPage } from '../../shared/types/account';
 import { Role } from '../../shared/types/roles';
-import { AppContext } from '../context';
+import type { AppContext } from '../app-context';
 import { User } from '../entities/user.entity';
 import { ConflictError, ForbiddenError, NotFoundError, UnauthorizedError } from '../errors';
 import { hashPassword, verifyPassword } from './password.service';

@@ -1,4 +1,4 @@
-import type { AuthUser } from '../middleware/auth';
+import type { AuthUser } from './auth-user';
 
 declare global {
   namespace Express {

@@ -79,7 +79,7 @@ function row(name: string, figure: number, baseline: number, baselineLabel: stri
     ratio: figure / baseline,
     target: `p95 < ${TARGET_P95_MS} ms`,
     met: figure < TARGET_P95_MS,
-    shortfall: `compare with the demo catalogue's figure in the same run: a ratio near 1 means the machine, not the catalogue, sets the time; see the query plans in DEVELOPERS.md.`,
+    shortfall: `compare with the demo catalogue's figure in the same run: a ratio near 1 means the machine, not the catalogue, sets the time; see the query plans in docs/performance.md.`,
   };
 }
 

@@ -41,7 +41,7 @@ export function printTable(rows: BenchRow[]): void {
   const missed = rows.filter((r) => !r.met);
   if (!missed.length) return;
   console.log('\nWhere a target is not met:');
-  missed.forEach((r) => console.log(`- ${r.name}: ${r.shortfall ?? 'no explanation given; see DEVELOPERS.md, "Speed".'}`));
+  missed.forEach((r) => console.log(`- ${r.name}: ${r.shortfall ?? 'no explanation given; see docs/performance.md.'}`));
 }
 
 /** Formats a rate the way every row shows it: operations per second and the time per operation. */

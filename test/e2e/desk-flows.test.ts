@@ -230,7 +230,7 @@ test('the desk sizes a bike from readings, revises the sent quote, books, and ma
   await visible(wide.page, 'balance-due').waitFor();
   const fitted = await call<{ quote: QuoteView }>('GET', `/quotes/${secondId}`, deskToken);
   expect(fitted.quote.status).toBe('fitted');
-  // Balance due = total − deposit paid, nothing refunded (DEVELOPERS.md, the service desk).
+  // Balance due = total − deposit paid, nothing refunded (docs/service-desk.md).
   expect(fitted.quote.balanceDueCents).toBe(fitted.quote.totalCents - fitted.quote.paidCents);
   expect(await visible(wide.page, 'balance-due').innerText()).toBe(`Fitted. Balance due: ${await visible(wide.page, 'total-balance').innerText()}`);
   await screenshot(wide.page, 'desk-quote-fitted-wide');

@@ -6,7 +6,8 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { createApp } from '../../server/app';
-import { AppContext, openContext } from '../../server/context';
+import type { AppContext } from '../../server/app-context';
+import { openContext } from '../../server/context';
 import { readConfig, ServerConfig } from '../../server/env';
 
 export interface TestContext extends AppContext {

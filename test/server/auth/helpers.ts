@@ -1,7 +1,7 @@
 /** Accounts, tokens and mail for the auth tests, made through the real services. */
 import request from 'supertest';
 import { Role } from '../../../shared/types/roles';
-import { AppContext } from '../../../server/context';
+import type { AppContext } from '../../../server/app-context';
 import { User } from '../../../server/entities/user.entity';
 import { DEFAULT_RATE_LIMITS, RateLimits } from '../../../server/env';
 import { OutboxEntry } from '../../../server/fakes/smtp-outbox';

@@ -11,7 +11,7 @@
  */
 import * as fc from 'fast-check';
 import { HttpError } from '../../../server/errors';
-import { AuthUser } from '../../../server/middleware/auth';
+import type { AuthUser } from '../../../server/types/auth-user';
 import { PaymentsService } from '../../../server/services/payments.service';
 import { actorOf, QuotesService } from '../../../server/services/quotes.service';
 import { StockService, writeCatalogue } from '../../../server/services/stock.service';
